@@ -1,0 +1,56 @@
+package org.assay.metrics;
+
+import org.assay.stats.Resampled;
+
+/**
+ * Binds a {@link SumMetric} to its unit table so the bootstrap can resample it with weights.
+ * The jackknife subtracts one unit's statistics from the total sums: no re-run of the metric
+ * over n-1 units. For one-hot tables the leave-one-out value depends only on the unit's cell,
+ * so it is computed once per cell.
+ */
+public final class SumStatistic implements Resampled {
+    private final UnitTable table;
+    private final SumMetric metric;
+
+    public SumStatistic(UnitTable table, SumMetric metric) {
+        this.table = table;
+        this.metric = metric;
+    }
+
+    public UnitTable table() { return table; }
+
+    @Override public int units() { return table.units(); }
+
+    @Override public double estimate() { return metric.value(table.weightedSums(null)); }
+
+    @Override public double value(int[] weights) { return metric.value(table.weightedSums(weights)); }
+
+    @Override
+    public double[] jackknife() {
+        double[] total = table.weightedSums(null);
+        int n = table.units();
+        double[] out = new double[n];
+        if (table instanceof OneHotUnitTable oneHot) {
+            double[] byCell = new double[oneHot.width()];
+            boolean[] done = new boolean[oneHot.width()];
+            for (int i = 0; i < n; i++) {
+                int c = oneHot.cellOf(i);
+                if (!done[c]) {
+                    total[c] -= 1;
+                    byCell[c] = metric.value(total);
+                    total[c] += 1;
+                    done[c] = true;
+                }
+                out[i] = byCell[c];
+            }
+            return out;
+        }
+        double[] work = new double[total.length];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(total, 0, work, 0, total.length);
+            table.addUnit(i, -1, work);
+            out[i] = metric.value(work);
+        }
+        return out;
+    }
+}

@@ -1,0 +1,121 @@
+package org.assay.metrics;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.Map;
+import java.util.SplittableRandom;
+import java.util.stream.Stream;
+import org.assay.common.UserInputException;
+import org.assay.data.ClassificationData;
+import org.assay.testing.ReferenceData;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The checks every metric in the registry must pass (the invariance suite scikit-learn runs
+ * over its metrics is the model; common practice): the order of rows does not matter,
+ * integer weights give exactly the value of the data repeated that many times, the
+ * closed-form jackknife equals the metric recomputed without that unit, and degenerate
+ * inputs give a clear error or a documented value.
+ */
+class MetricInvarianceTest {
+
+    static Stream<MetricDefinition> metrics() { return MetricRegistry.all().stream(); }
+
+    private static final JsonNode CASES = ReferenceData.load("sklearn_metrics.json").get("cases");
+
+    private static ClassificationData binary() { return TestData.fromReference(CASES.get(1)); }
+
+    private static ClassificationData multiclass() { return TestData.fromReference(CASES.get(3)); }
+
+    private static Map<String, String> params(MetricDefinition d) {
+        return d.params().contains("k") ? Map.of("k", "2") : Map.of();
+    }
+
+    /** Data the metric is defined on: binary for binary-only metrics, multiclass otherwise. */
+    private static ClassificationData dataFor(MetricDefinition d) {
+        boolean binaryOnly = d.params().contains("positive");
+        return binaryOnly ? binary() : multiclass();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("metrics")
+    void rowOrderDoesNotMatter(MetricDefinition d) {
+        ClassificationData data = dataFor(d);
+        int[] perm = permutation(data.size(), new SplittableRandom(1));
+        double original = d.prepare(data, params(d)).value();
+        double shuffled = d.prepare(TestData.permuted(data, perm), params(d)).value();
+        assertThat(shuffled).isCloseTo(original, within(1e-12));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("metrics")
+    void integerWeightsEqualRepetition(MetricDefinition d) {
+        ClassificationData data = dataFor(d);
+        SplittableRandom rng = new SplittableRandom(2);
+        for (int trial = 0; trial < 5; trial++) {
+            int[] w = new int[data.size()];
+            for (int i = 0; i < w.length; i++) w[i] = rng.nextInt(4);   // zeros included
+            w[0] = Math.max(w[0], 1);
+            double weighted = d.prepare(data, params(d)).statistic().value(w);
+            double repeated = d.prepare(TestData.repeated(data, w), params(d)).value();
+            assertThat(weighted).isCloseTo(repeated, within(1e-12));
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("metrics")
+    void jackknifeEqualsLeaveOneOut(MetricDefinition d) {
+        ClassificationData data = dataFor(d);
+        double[] jack = d.prepare(data, params(d)).statistic().jackknife();
+        assertThat(jack).hasSize(data.size());
+        for (int i : new int[] {0, 7, data.size() - 1}) {
+            int[] w = new int[data.size()];
+            java.util.Arrays.fill(w, 1);
+            w[i] = 0;
+            double without = d.prepare(TestData.repeated(data, w), params(d)).value();
+            assertThat(jack[i]).as("unit %d", i).isCloseTo(without, within(1e-12));
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("metrics")
+    void singleClassTruthGivesClearErrorOrDocumentedValue(MetricDefinition d) {
+        ClassificationData src = dataFor(d);
+        int[] truth = new int[src.size()];   // every example of class 0
+        ClassificationData data = new ClassificationData(src.source(), src.ids(), src.classes(), truth,
+                src.predicted(), src.scores(), src.probabilities(), src.positive(), src.warnings());
+        if (d.kind() == MetricKind.ROC_AUC) {
+            // ROC AUC needs both classes (common practice; scikit-learn raises ValueError too)
+            assertThatThrownBy(() -> d.prepare(data, params(d))).isInstanceOf(UserInputException.class)
+                    .hasMessageContaining("no positive");
+        } else {
+            // documented values: ratios that are 0/0 count as 0 (scikit-learn zero_division=0)
+            double v = d.prepare(data, params(d)).value();
+            assertThat(v).isBetween(-1.0, 1.0);
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("metrics")
+    void missingPredictionsAreAClearError(MetricDefinition d) {
+        ClassificationData src = dataFor(d);
+        ClassificationData noPred = new ClassificationData(src.source(), src.ids(), src.classes(), src.truth(),
+                null, null, null, src.positive(), src.warnings());
+        assertThatThrownBy(() -> d.prepare(noPred, params(d))).isInstanceOf(UserInputException.class)
+                .hasMessageContaining("test.csv");
+    }
+
+    private static int[] permutation(int n, SplittableRandom rng) {
+        int[] p = new int[n];
+        for (int i = 0; i < n; i++) p[i] = i;
+        for (int i = n - 1; i > 0; i--) {
+            int j = rng.nextInt(i + 1);
+            int t = p[i]; p[i] = p[j]; p[j] = t;
+        }
+        return p;
+    }
+}
