@@ -1,8 +1,93 @@
 package org.assay.cli;
 
-/** Entry point placeholder; the command tree is added with the CLI. */
-public final class Main {
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.util.Properties;
+import org.assay.common.UserInputException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * The {@code assay} command. Exit codes (DESIGN.md): 0 done; 1 done and a --fail-on condition
+ * met; 2 bad usage or bad input (one line on stderr); 3 internal error.
+ */
+@Command(name = "assay",
+        mixinStandardHelpOptions = true,
+        versionProvider = Main.Version.class,
+        description = {
+            "Audits reported machine-learning results: recomputes each claimed metric from your",
+            "per-example predictions with an interval, and says claim by claim whether your",
+            "reproduction is consistent with the printed value.",
+            ""},
+        subcommands = {AuditCommand.class, MeasureCommand.class, DemoCommand.class,
+                CommandLine.HelpCommand.class},
+        footer = {"", "Run 'assay COMMAND --help' for a command's options and examples."})
+public final class Main implements Runnable {
+    public static final int DONE = 0;
+    public static final int FAIL_ON_MET = 1;
+    public static final int BAD_INPUT = 2;
+    public static final int INTERNAL = 3;
+
+    @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "Print stack traces for errors.")
+    boolean debug;
+
+    @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command (audit, measure, demo)");
+    }
+
     public static void main(String[] args) {
-        System.out.println("assay");
+        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line and returns the exit code; used by main and by the tests. */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> {
+            boolean debug = java.util.Arrays.asList(args).contains("--debug");
+            if (ex instanceof UserInputException u) {
+                err.println("assay: " + u.oneLine());
+                if (debug) ex.printStackTrace(err);
+                err.flush();
+                return BAD_INPUT;
+            }
+            err.println("assay: internal error: " + ex + (debug ? "" : " (run with --debug for details)"));
+            if (debug) ex.printStackTrace(err);
+            err.flush();
+            return INTERNAL;
+        });
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("assay: " + ex.getMessage() + " (see '" + ex.getCommandLine().getCommandName()
+                    + " --help')");
+            err.flush();
+            return BAD_INPUT;
+        });
+        int code = cl.execute(args);
+        out.flush();
+        return code;
+    }
+
+    static String version() {
+        try (InputStream in = Main.class.getResourceAsStream("/assay.properties")) {
+            Properties p = new Properties();
+            if (in != null) p.load(in);
+            return p.getProperty("version", "unknown");
+        } catch (IOException e) {
+            return "unknown";
+        }
+    }
+
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"assay " + version(), "Java " + System.getProperty("java.version")};
+        }
     }
 }

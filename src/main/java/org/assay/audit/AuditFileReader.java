@@ -1,0 +1,132 @@
+package org.assay.audit;
+
+import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Set;
+import org.assay.common.UserInputException;
+import org.assay.data.ReadOptions;
+
+/**
+ * Reads an audit file: the claims file and, per reproduced table row, the predictions and how
+ * to read them. Paths are relative to the audit file's folder.
+ *
+ * <pre>
+ * claims: claims.yaml
+ * margin: 1.0            # percentage points (optional)
+ * reproductions:
+ *   - table: T2
+ *     row: "ChirpNet (ours)"
+ *     predictions: predictions.csv
+ *     manifest: manifest.txt        # optional
+ *     truth: truth.csv              # optional
+ *     positive: "1"                 # optional
+ *     columns: {id: clip, label: species, prediction: predicted, score: score, probability_prefix: p_}
+ * </pre>
+ */
+public final class AuditFileReader {
+    private static final Set<String> TOP = Set.of("claims", "margin", "reproductions");
+    private static final Set<String> REPRO = Set.of("table", "row", "predictions", "manifest", "truth", "positive", "columns");
+    private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
+
+    /** The parsed audit file: claims path, reproductions, and a margin in points or null. */
+    public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints) {}
+
+    private AuditFileReader() {}
+
+    public static AuditFile read(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new UserInputException(file, null, "audit file not found", "check the path");
+        }
+        JsonNode root;
+        try {
+            root = new ObjectMapper(new YAMLFactory()).readTree(file.toFile());
+        } catch (JsonMappingException e) {
+            throw new UserInputException(file, line(e), "not a valid audit file: " + e.getOriginalMessage(),
+                    "see 'assay audit --help' for the format");
+        } catch (IOException e) {
+            throw new UserInputException(file, null, "cannot read: " + e.getMessage(), "check the file");
+        }
+        if (root == null || !root.isObject()) {
+            throw new UserInputException(file, null, "the audit file is empty or not a mapping",
+                    "start it with 'claims: FILE' and 'reproductions:'");
+        }
+        Path base = file.toAbsolutePath().getParent();
+        checkFields(file, root, TOP, "");
+        Path claims = path(file, base, root, "claims", "");
+        if (claims == null) throw new UserInputException(file, null, "missing 'claims:'", "name the claims file");
+        Double margin = null;
+        if (root.has("margin")) {
+            if (!root.get("margin").isNumber()) {
+                throw new UserInputException(file, "/margin", "margin must be a number of points", "for example margin: 1.0");
+            }
+            margin = root.get("margin").asDouble();
+        }
+        JsonNode list = root.get("reproductions");
+        if (list == null || !list.isArray() || list.isEmpty()) {
+            throw new UserInputException(file, "/reproductions", "no reproductions listed",
+                    "add a list entry with at least 'predictions: FILE'");
+        }
+        List<Reproduction> out = new ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            JsonNode r = list.get(i);
+            String at = "/reproductions/" + i;
+            if (!r.isObject()) throw new UserInputException(file, at, "each reproduction must be a mapping", null);
+            checkFields(file, r, REPRO, at);
+            Path predictions = path(file, base, r, "predictions", at);
+            if (predictions == null) throw new UserInputException(file, at, "missing 'predictions:'", "name the predictions file");
+            ReadOptions o = ReadOptions.defaults();
+            JsonNode cols = r.get("columns");
+            String id = o.idColumn(), label = o.labelColumn(), pred = o.predictionColumn(), score = o.scoreColumn(),
+                    prefix = o.probabilityPrefix();
+            if (cols != null) {
+                checkFields(file, cols, COLUMNS, at + "/columns");
+                id = text(cols, "id", id);
+                label = text(cols, "label", label);
+                pred = text(cols, "prediction", pred);
+                score = text(cols, "score", score);
+                prefix = text(cols, "probability_prefix", prefix);
+            }
+            o = new ReadOptions(id, label, pred, score, prefix, text(r, "positive", null),
+                    path(file, base, r, "manifest", at), path(file, base, r, "truth", at));
+            out.add(new Reproduction(text(r, "table", null), text(r, "row", null), predictions, o));
+        }
+        return new AuditFile(claims, out, margin);
+    }
+
+    private static void checkFields(Path file, JsonNode node, Set<String> allowed, String at) {
+        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
+            String f = it.next();
+            if (!allowed.contains(f)) {
+                throw new UserInputException(file, at + "/" + f, "unknown field '" + f + "'",
+                        "allowed here: " + String.join(", ", new java.util.TreeSet<>(allowed)));
+            }
+        }
+    }
+
+    private static String text(JsonNode n, String field, String fallback) {
+        JsonNode v = n.get(field);
+        return v == null || v.isNull() ? fallback : v.asText();
+    }
+
+    private static Path path(Path file, Path base, JsonNode n, String field, String at) {
+        String t = text(n, field, null);
+        if (t == null) return null;
+        Path p = base.resolve(t).normalize();
+        if (!Files.isRegularFile(p)) {
+            throw new UserInputException(file, at + "/" + field, "file not found: " + p, "check the path (relative to the audit file)");
+        }
+        return p;
+    }
+
+    private static String line(JsonMappingException e) {
+        return e.getLocation() == null ? null : "line " + e.getLocation().getLineNr();
+    }
+}

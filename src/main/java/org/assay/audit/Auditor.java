@@ -1,0 +1,148 @@
+package org.assay.audit;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.assay.claims.Claim;
+import org.assay.claims.ClaimTable;
+import org.assay.claims.ClaimsFile;
+import org.assay.claims.ClaimsReader;
+import org.assay.common.UserInputException;
+import org.assay.data.ClassificationData;
+import org.assay.data.ClassificationReader;
+import org.assay.metrics.MetricRegistry;
+import org.assay.metrics.PreparedMetric;
+import org.assay.stats.Multiplicity;
+
+/**
+ * Runs an audit: reads the claims and each reproduction's predictions, computes the evidence
+ * for every claim of the reproduced rows, adjusts the p-values across the whole audit (Holm)
+ * and assigns the verdicts.
+ */
+public final class Auditor {
+
+    public AuditResult run(AuditRequest request) {
+        ClaimsFile claims = ClaimsReader.read(request.claims());
+        List<InputFile> inputs = new ArrayList<>();
+        inputs.add(InputFile.of("claims", request.claims()));
+        List<String> warnings = new ArrayList<>();
+        Estimator estimator = new Estimator(request.settings());
+        ClaimAssessor assessor = new ClaimAssessor(request.settings());
+
+        List<Finding> findings = new ArrayList<>();
+        Set<Claim> audited = new LinkedHashSet<>();
+        for (Reproduction r : request.reproductions()) {
+            ClaimTable table = selectTable(claims, r);
+            String row = selectRow(claims, table, r);
+            ClassificationData data = ClassificationReader.read(r.predictions(), r.options());
+            inputs.add(InputFile.of("predictions for " + table.id(), r.predictions()));
+            if (r.options().manifest() != null) inputs.add(InputFile.of("manifest for " + table.id(), r.options().manifest()));
+            if (r.options().truth() != null) inputs.add(InputFile.of("truth for " + table.id(), r.options().truth()));
+            warnings.addAll(data.warnings());
+            Long population = table.testSize() == null ? null : table.testSize().longValue();
+            checkSizes(claims, table, data, population);
+            List<String> tableNotes = tableNotes(table, data, population, r);
+
+            Map<String, Evidence> cache = new HashMap<>();
+            for (Claim c : table.claims()) {
+                if (!row.equals(c.row())) continue;
+                audited.add(c);
+                double[] ci = c.value().roundingInterval(c.scale());
+                if (!MetricRegistry.knows(c.metric())) {
+                    throw new UserInputException(claims.file(), c.location().describe(),
+                            "unknown metric '" + c.metric() + "'", "known metrics: "
+                            + String.join(", ", MetricRegistry.all().stream().map(d -> d.id()).toList()));
+                }
+                Evidence evidence;
+                try {
+                    String key = c.metric() + c.params();
+                    evidence = cache.get(key);
+                    if (evidence == null) {
+                        PreparedMetric m = MetricRegistry.get(c.metric()).prepare(data, c.params());
+                        evidence = estimator.evidence(m, population);
+                        cache.put(key, evidence);
+                    }
+                } catch (UserInputException e) {
+                    findings.add(Finding.notComputable(c, ci[0], ci[1], e.problem()));
+                    continue;
+                }
+                double margin = c.margin() != null ? c.margin() : request.margin();
+                findings.add(assessor.assess(c, evidence, data.size(), population, margin, tableNotes));
+            }
+        }
+        List<Finding> adjusted = adjust(findings, assessor);
+        List<UnauditedClaim> unaudited = new ArrayList<>();
+        for (Claim c : claims.allClaims()) {
+            if (!audited.contains(c)) {
+                unaudited.add(new UnauditedClaim(c, "no predictions were given for row '" + c.row() + "' of table "
+                        + c.tableId()));
+            }
+        }
+        return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings);
+    }
+
+    /** Holm's step-down adjustment over every computable claim of the audit (Holm 1979). */
+    private static List<Finding> adjust(List<Finding> findings, ClaimAssessor assessor) {
+        List<Integer> idx = new ArrayList<>();
+        for (int i = 0; i < findings.size(); i++) if (findings.get(i).verdict() != Verdict.NOT_COMPUTABLE) idx.add(i);
+        double[] p = new double[idx.size()];
+        for (int j = 0; j < p.length; j++) p[j] = findings.get(idx.get(j)).pValue();
+        double[] holm = p.length == 0 ? p : Multiplicity.holm(p);
+        List<Finding> out = new ArrayList<>(findings);
+        for (int j = 0; j < p.length; j++) out.set(idx.get(j), assessor.withAdjustedP(findings.get(idx.get(j)), holm[j]));
+        return out;
+    }
+
+    private static ClaimTable selectTable(ClaimsFile claims, Reproduction r) {
+        if (r.tableId() == null) {
+            if (claims.tables().size() == 1) return claims.tables().get(0);
+            throw UserInputException.usage("the claims file " + claims.file() + " has " + claims.tables().size()
+                    + " tables", "name the reproduced one with --table (tables: "
+                    + String.join(", ", claims.tables().stream().map(ClaimTable::id).toList()) + ")");
+        }
+        return claims.tables().stream().filter(t -> t.id().equals(r.tableId())).findFirst()
+                .orElseThrow(() -> UserInputException.usage("table '" + r.tableId() + "' is not in " + claims.file(),
+                        "tables: " + String.join(", ", claims.tables().stream().map(ClaimTable::id).toList())));
+    }
+
+    private static String selectRow(ClaimsFile claims, ClaimTable table, Reproduction r) {
+        Set<String> rows = new LinkedHashSet<>();
+        for (Claim c : table.claims()) rows.add(c.row());
+        if (r.row() == null) {
+            if (rows.size() == 1) return rows.iterator().next();
+            throw UserInputException.usage("table " + table.id() + " has rows " + String.join(", ", rows),
+                    "name the reproduced row with --row");
+        }
+        if (!rows.contains(r.row())) {
+            throw UserInputException.usage("row '" + r.row() + "' is not in table " + table.id() + " of " + claims.file(),
+                    "rows: " + String.join(", ", rows));
+        }
+        return r.row();
+    }
+
+    private static void checkSizes(ClaimsFile claims, ClaimTable table, ClassificationData data, Long population) {
+        if (population != null && data.size() > population) {
+            throw new UserInputException(claims.file(), null, "table " + table.id() + " has test_size " + population
+                    + " but the predictions " + data.source() + " hold " + data.size() + " examples",
+                    "correct test_size, or check that the predictions belong to this table");
+        }
+    }
+
+    private static List<String> tableNotes(ClaimTable table, ClassificationData data, Long population, Reproduction r) {
+        List<String> notes = new ArrayList<>();
+        if (population == null) {
+            notes.add("the test-set size is unknown, so intervals use infinite-population methods; "
+                    + "set test_size to use the finite-population correction");
+        } else if (data.size() < population && r.options().manifest() == null) {
+            notes.add("no subsample manifest was given: the statistics assume the " + data.size() + " examples are a simple "
+                    + "random sample of the " + population + "-item test set");
+        }
+        if (table.runs() > 1) {
+            notes.add("the claim averages " + table.runs() + " runs; run-to-run variation is not part of this interval");
+        }
+        return notes;
+    }
+}

@@ -1,0 +1,33 @@
+package org.assay.audit;
+
+import org.assay.metrics.MetricKind;
+import org.assay.metrics.PreparedMetric;
+import org.assay.stats.BootstrapEngine;
+import org.assay.stats.DeLong;
+
+/** Turns a prepared metric into evidence with the method the settings ask for. */
+final class Estimator {
+    private final EstimationSettings settings;
+
+    Estimator(EstimationSettings settings) { this.settings = settings; }
+
+    /**
+     * @param population full test-set size N, or null when unknown
+     */
+    Evidence evidence(PreparedMetric metric, Long population) {
+        MetricKind kind = metric.definition().kind();
+        IntervalChoice choice = settings.interval().resolve(kind, metric.definition().id());
+        long n = metric.units();
+        if (kind == MetricKind.COUNT && choice.isProportion()) {
+            return new CountEvidence(metric.successes(), n, population, choice);
+        }
+        if (kind == MetricKind.ROC_AUC && choice == IntervalChoice.DELONG) {
+            return new AucEvidence(DeLong.of(metric.scores(), metric.positive()), n, population);
+        }
+        BootstrapEngine engine = new BootstrapEngine(settings.resamples(), settings.seed(), settings.threads());
+        var raw = kind == MetricKind.COUNT
+                ? engine.runCount(metric.successes(), n)
+                : engine.run(metric.statistic());
+        return new BootstrapEvidence(raw, choice, n, population);
+    }
+}

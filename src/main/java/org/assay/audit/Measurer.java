@@ -1,0 +1,34 @@
+package org.assay.audit;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.assay.data.ClassificationData;
+import org.assay.metrics.MetricRegistry;
+import org.assay.metrics.PreparedMetric;
+
+/** Estimates metrics with intervals for a predictions file (the {@code measure} command). */
+public final class Measurer {
+    private final EstimationSettings settings;
+
+    public Measurer(EstimationSettings settings) { this.settings = settings; }
+
+    /** A metric id with its parameters, as given on the command line. */
+    public record MetricRequest(String id, Map<String, String> params) {}
+
+    public List<Measurement> measure(ClassificationData data, List<MetricRequest> metrics, Long population) {
+        if (population != null && data.size() > population) {
+            throw org.assay.common.UserInputException.usage("--test-size " + population + " is smaller than the "
+                    + data.size() + " examples in " + data.source(), "give the size of the full test set");
+        }
+        Estimator estimator = new Estimator(settings);
+        List<Measurement> out = new ArrayList<>();
+        for (MetricRequest r : metrics) {
+            PreparedMetric m = MetricRegistry.get(r.id()).prepare(data, r.params());
+            Evidence e = estimator.evidence(m, population);
+            out.add(new Measurement(r.id(), r.params(), data.size(), population, e.estimate(),
+                    e.interval(settings.confidence()), e.standardError(), e.notes()));
+        }
+        return out;
+    }
+}

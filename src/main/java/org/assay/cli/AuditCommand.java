@@ -1,0 +1,111 @@
+package org.assay.cli;
+
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.assay.audit.AuditFileReader;
+import org.assay.audit.AuditRequest;
+import org.assay.audit.AuditResult;
+import org.assay.audit.Auditor;
+import org.assay.audit.Reproduction;
+import org.assay.common.UserInputException;
+import org.assay.report.JsonReport;
+import org.assay.report.MarkdownReport;
+import org.assay.report.OutputDirectory;
+import org.assay.report.SummaryTable;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code assay audit}: claims versus a reproduction, claim by claim. */
+@Command(name = "audit", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Tests each claim of a results table against your reproduced predictions and writes",
+            "report.md and report.json: the reproduced value with its interval, the claim's rounding",
+            "interval, a p-value (Holm-adjusted across the audit) and a verdict: consistent,",
+            "inconclusive or discrepant.", ""},
+        footer = {"", "Examples:",
+            "  assay audit --claims claims.yaml --predictions preds.csv --manifest subsample.txt \\",
+            "      --table T2 --row \"ChirpNet (ours)\" --positive 1 --out audit-report",
+            "  assay audit examples/birdcalls/audit.yaml --out audit-report --fail-on discrepant",
+            "",
+            "An audit file names the claims file and, per reproduced table row, the predictions:",
+            "  claims: claims.yaml",
+            "  reproductions:",
+            "    - {table: T2, row: \"ChirpNet (ours)\", predictions: preds.csv, manifest: subsample.txt}",
+            "",
+            "Exit codes: 0 done; 1 done and the --fail-on condition met; 2 bad usage or input; 3 internal error."})
+final class AuditCommand implements Callable<Integer> {
+    @Spec CommandSpec spec;
+
+    @Parameters(arity = "0..1", paramLabel = "AUDIT_FILE", description = "An audit file (YAML) instead of --claims/--predictions.")
+    Path auditFile;
+
+    @Option(names = "--claims", paramLabel = "FILE", description = "Claims file (YAML, JSON or CSV).")
+    Path claims;
+
+    @Option(names = "--predictions", paramLabel = "FILE", description = "Predictions file (CSV, TSV or JSONL).")
+    Path predictions;
+
+    @Option(names = "--table", paramLabel = "ID", description = "Claims table the predictions reproduce (needed when there are several).")
+    String table;
+
+    @Option(names = "--row", paramLabel = "LABEL", description = "Row of the reproduced method (needed when the table has several).")
+    String row;
+
+    @Mixin ColumnOptions columns;
+
+    @Option(names = "--margin", paramLabel = "POINTS", description = "Equivalence margin in percentage points (default 1).")
+    Double margin;
+
+    @Mixin EstimationOptions estimation;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "audit-report", description = "Report folder (default ${DEFAULT-VALUE}).")
+    Path out;
+
+    @Option(names = "--force", description = "Overwrite existing report files.")
+    boolean force;
+
+    @Option(names = "--fail-on", paramLabel = "WHAT", defaultValue = "never",
+            description = "Exit 1 when a claim is: discrepant, inconclusive (or worse), not-computable; or never (default).")
+    String failOn;
+
+    @Override
+    public Integer call() {
+        FailOn condition = FailOn.parse(failOn);
+        AuditRequest request = request();
+        AuditResult result = new Auditor().run(request);
+        Map<String, String> files = new LinkedHashMap<>();
+        files.put("report.md", MarkdownReport.render(result, Main.version()));
+        files.put("report.json", JsonReport.render(result, Main.version()));
+        List<Path> written = new OutputDirectory(out, force).write(files);
+        var stdout = spec.commandLine().getOut();
+        stdout.print(SummaryTable.render(result));
+        for (Path p : written) stdout.println("wrote " + p);
+        stdout.flush();
+        return condition.met(result) ? Main.FAIL_ON_MET : Main.DONE;
+    }
+
+    private AuditRequest request() {
+        if (auditFile != null) {
+            if (claims != null || predictions != null) {
+                throw UserInputException.usage("give either an audit file or --claims and --predictions, not both",
+                        "drop one of them");
+            }
+            AuditFileReader.AuditFile f = AuditFileReader.read(auditFile);
+            double m = margin != null ? margin : f.marginPoints() != null ? f.marginPoints() : 1.0;
+            return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100);
+        }
+        if (claims == null || predictions == null) {
+            throw UserInputException.usage("audit needs --claims FILE and --predictions FILE (or an audit file)",
+                    "see 'assay audit --help'");
+        }
+        Reproduction r = new Reproduction(table, row, predictions, columns.readOptions());
+        return new AuditRequest(claims, List.of(r), estimation.settings(), (margin == null ? 1.0 : margin) / 100);
+    }
+}

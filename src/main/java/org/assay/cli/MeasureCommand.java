@@ -1,0 +1,149 @@
+package org.assay.cli;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.assay.audit.Measurement;
+import org.assay.audit.Measurer;
+import org.assay.common.UserInputException;
+import org.assay.data.ClassificationData;
+import org.assay.data.ClassificationReader;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code assay measure}: metrics with intervals for a predictions file, no claims involved. */
+@Command(name = "measure", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Computes metrics with intervals for a predictions file.", ""},
+        footer = {"", "Examples:",
+            "  assay measure preds.csv --task classification --metric accuracy,macro_f1 --test-size 4000",
+            "  assay measure preds.csv --task classification --metric roc_auc --interval delong --positive 1 --format json",
+            "  assay measure preds.csv --task classification --metric top_k_accuracy:k=3 --interval wilson",
+            "",
+            "Metric parameters follow a colon: NAME:key=value;key=value."})
+final class MeasureCommand implements Callable<Integer> {
+    @Spec CommandSpec spec;
+
+    @Parameters(paramLabel = "FILE", description = "Predictions file (CSV, TSV or JSONL).")
+    Path file;
+
+    @Option(names = "--task", paramLabel = "TASK", defaultValue = "classification",
+            description = "Task of the predictions: classification (default).")
+    String task;
+
+    @Option(names = "--metric", paramLabel = "NAME", split = ",", required = true,
+            description = "Metrics to compute, comma-separated (accuracy, error_rate, balanced_accuracy, precision, "
+                    + "recall, f1, macro_f1, micro_f1, weighted_f1, mcc, cohen_kappa, roc_auc, top_k_accuracy:k=5, ...).")
+    List<String> metrics;
+
+    @Option(names = "--test-size", paramLabel = "N",
+            description = "Size of the full test set the file is a random subsample of (enables finite-population methods).")
+    Long testSize;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text", description = "text (default) or json.")
+    String format;
+
+    @Mixin ColumnOptions columns;
+
+    @Mixin EstimationOptions estimation;
+
+    @Override
+    public Integer call() throws Exception {
+        if (!task.equals("classification")) {
+            throw UserInputException.usage("task '" + task + "' is not supported yet", "use --task classification");
+        }
+        if (!format.equals("text") && !format.equals("json")) {
+            throw UserInputException.usage("unknown --format '" + format + "'", "use text or json");
+        }
+        if (testSize != null && testSize < 1) {
+            throw UserInputException.usage("--test-size must be positive", "give the size of the full test set");
+        }
+        List<Measurer.MetricRequest> requests = new ArrayList<>();
+        for (String m : metrics) requests.add(parseMetric(m));
+        ClassificationData data = ClassificationReader.read(file, columns.readOptions());
+        List<Measurement> results = new Measurer(estimation.settings()).measure(data, requests, testSize);
+        var out = spec.commandLine().getOut();
+        var err = spec.commandLine().getErr();
+        data.warnings().forEach(w -> err.println("assay: warning: " + w));
+        out.print(format.equals("json") ? json(data, results) : text(results));
+        out.flush();
+        return Main.DONE;
+    }
+
+    static Measurer.MetricRequest parseMetric(String text) {
+        String t = text.trim();
+        int colon = t.indexOf(':');
+        if (colon < 0) return new Measurer.MetricRequest(t, Map.of());
+        Map<String, String> params = new LinkedHashMap<>();
+        for (String kv : t.substring(colon + 1).split(";")) {
+            int eq = kv.indexOf('=');
+            if (eq <= 0) throw UserInputException.usage("metric parameter '" + kv + "' is not key=value", "write for example top_k_accuracy:k=5");
+            params.put(kv.substring(0, eq).trim(), kv.substring(eq + 1).trim());
+        }
+        return new Measurer.MetricRequest(t.substring(0, colon), params);
+    }
+
+    private String text(List<Measurement> results) {
+        StringBuilder sb = new StringBuilder();
+        String fmt = "%-24s %8s %10s  %-22s %s%n";
+        sb.append(String.format(Locale.ROOT, fmt, "metric", "n", "value", "interval", "method"));
+        for (Measurement m : results) {
+            sb.append(String.format(Locale.ROOT, fmt, label(m), m.n(), String.format(Locale.ROOT, "%.4f", m.value()),
+                    String.format(Locale.ROOT, "[%.4f, %.4f]", m.interval().lower(), m.interval().upper()),
+                    m.interval().method()));
+        }
+        results.stream().flatMap(m -> m.notes().stream()).distinct().forEach(n -> sb.append("note: ").append(n).append('\n'));
+        return sb.toString();
+    }
+
+    private static String label(Measurement m) {
+        if (m.params().isEmpty()) return m.metric();
+        StringBuilder sb = new StringBuilder(m.metric()).append(':');
+        m.params().forEach((k, v) -> sb.append(k).append('=').append(v).append(';'));
+        return sb.substring(0, sb.length() - 1);
+    }
+
+    private String json(ClassificationData data, List<Measurement> results) throws Exception {
+        ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+        ObjectNode root = mapper.createObjectNode();
+        root.put("schema_version", 1);
+        root.put("file", file.toString());
+        root.put("task", task);
+        root.put("n", data.size());
+        if (testSize == null) root.putNull("test_size"); else root.put("test_size", testSize);
+        var s = estimation.settings();
+        root.put("confidence", s.confidence());
+        root.put("seed", s.seed());
+        root.put("resamples", s.resamples());
+        ArrayNode arr = root.putArray("metrics");
+        for (Measurement m : results) {
+            ObjectNode o = arr.addObject();
+            o.put("metric", m.metric());
+            ObjectNode p = o.putObject("params");
+            m.params().forEach(p::put);
+            o.put("value", m.value());
+            ObjectNode i = o.putObject("interval");
+            i.put("lower", m.interval().lower());
+            i.put("upper", m.interval().upper());
+            i.put("confidence", m.interval().confidence());
+            i.put("method", m.interval().method());
+            o.put("standard_error", m.standardError());
+            ArrayNode notes = o.putArray("notes");
+            m.notes().forEach(notes::add);
+        }
+        ArrayNode w = root.putArray("warnings");
+        data.warnings().forEach(w::add);
+        return mapper.writeValueAsString(root) + "\n";
+    }
+}

@@ -1,0 +1,135 @@
+package org.assay.report;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.assay.audit.AuditResult;
+import org.assay.audit.Finding;
+import org.assay.audit.InputFile;
+import org.assay.audit.UnauditedClaim;
+import org.assay.audit.Verdict;
+import org.assay.claims.Claim;
+import org.assay.stats.Interval;
+
+/**
+ * report.json: the audit for machines. The schema is documented in DEVELOPERS.md
+ * ("report.json schema"); bump {@link #SCHEMA_VERSION} on any incompatible change.
+ * Values are on the metric's fraction scale; undefined numbers are null.
+ */
+public final class JsonReport {
+    public static final int SCHEMA_VERSION = 1;
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private JsonReport() {}
+
+    public static String render(AuditResult r, String toolVersion) {
+        ObjectNode root = JSON.createObjectNode();
+        root.put("schema_version", SCHEMA_VERSION);
+        ObjectNode tool = root.putObject("tool");
+        tool.put("name", "assay");
+        tool.put("version", toolVersion);
+        ObjectNode s = root.putObject("settings");
+        s.put("confidence", r.settings().confidence());
+        s.put("interval", r.settings().interval().id());
+        s.put("resamples", r.settings().resamples());
+        s.put("seed", r.settings().seed());
+        s.put("margin", r.margin());
+        s.put("multiplicity", "holm");
+        ObjectNode source = root.putObject("source");
+        source.put("title", r.claims().title());
+        source.put("document", r.claims().document());
+        ArrayNode inputs = root.putArray("inputs");
+        for (InputFile f : r.inputs()) {
+            ObjectNode o = inputs.addObject();
+            o.put("role", f.role());
+            o.put("path", f.path().toString());
+            o.put("bytes", f.bytes());
+            o.put("sha256", f.sha256());
+        }
+        ObjectNode counts = root.putObject("counts");
+        for (Verdict v : Verdict.values()) counts.put(v.word(), r.count(v));
+        ArrayNode findings = root.putArray("findings");
+        for (Finding f : r.findings()) findings.add(finding(f));
+        ArrayNode unaudited = root.putArray("unaudited");
+        for (UnauditedClaim u : r.unaudited()) {
+            ObjectNode o = claim(u.claim());
+            o.put("reason", u.reason());
+            unaudited.add(o);
+        }
+        ArrayNode warnings = root.putArray("warnings");
+        r.warnings().forEach(warnings::add);
+        try {
+            return JSON.writeValueAsString(root) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static ObjectNode claim(Claim c) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("table", c.tableId());
+        o.put("row", c.row());
+        ArrayNode col = o.putArray("column");
+        c.column().forEach(col::add);
+        o.put("metric", c.metric());
+        ObjectNode params = o.putObject("params");
+        c.params().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
+                .forEach(e -> params.put(e.getKey(), e.getValue()));
+        o.put("printed", c.value().text());
+        o.put("scale", c.scale().id());
+        if (c.location() != null) {
+            ObjectNode loc = o.putObject("location");
+            if (c.location().line() > 0) loc.put("line", c.location().line());
+            if (c.location().pointer() != null) loc.put("pointer", c.location().pointer());
+        }
+        return o;
+    }
+
+    private static ObjectNode finding(Finding f) {
+        ObjectNode o = claim(f.claim());
+        o.put("verdict", f.verdict().word());
+        ArrayNode ci = o.putArray("claim_interval");
+        num(ci, f.claimLower());
+        num(ci, f.claimUpper());
+        if (f.verdict() == Verdict.NOT_COMPUTABLE) {
+            o.put("reason", f.reason());
+            return o;
+        }
+        o.put("n", f.n());
+        if (f.population() == null) o.putNull("test_size"); else o.put("test_size", f.population());
+        num(o, "estimate", f.estimate());
+        o.set("interval", interval(f.interval()));
+        o.set("equivalence_interval", interval(f.equivalence()));
+        ArrayNode range = o.putArray("range_if_true");
+        num(range, f.rangeIfTrue()[0]);
+        num(range, f.rangeIfTrue()[1]);
+        num(o, "p_value", f.pValue());
+        num(o, "holm_p_value", f.adjustedP());
+        num(o, "margin", f.margin());
+        num(o, "difference", f.difference());
+        o.put("direction", f.direction());
+        if (f.itemsToSettle() == null) o.putNull("items_to_settle"); else o.put("items_to_settle", f.itemsToSettle());
+        ArrayNode notes = o.putArray("notes");
+        f.notes().forEach(notes::add);
+        return o;
+    }
+
+    private static ObjectNode interval(Interval i) {
+        ObjectNode o = JSON.createObjectNode();
+        num(o, "lower", i.lower());
+        num(o, "upper", i.upper());
+        o.put("confidence", i.confidence());
+        o.put("method", i.method());
+        return o;
+    }
+
+    private static void num(ObjectNode o, String field, double v) {
+        if (Double.isFinite(v)) o.put(field, v); else o.putNull(field);
+    }
+
+    private static void num(ArrayNode a, double v) {
+        if (Double.isFinite(v)) a.add(v); else a.addNull();
+    }
+}

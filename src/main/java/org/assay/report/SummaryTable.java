@@ -1,0 +1,34 @@
+package org.assay.report;
+
+import java.util.Locale;
+import org.assay.audit.AuditResult;
+import org.assay.audit.Finding;
+import org.assay.audit.Verdict;
+import org.assay.claims.Claim;
+
+/** The short plain-text table printed on stdout after an audit. */
+public final class SummaryTable {
+    private SummaryTable() {}
+
+    public static String render(AuditResult r) {
+        StringBuilder sb = new StringBuilder();
+        String fmt = "%-36s %-20s %9s %11s  %-22s %s%n";
+        sb.append(String.format(Locale.ROOT, fmt, "claim", "metric", "printed", "reproduced",
+                Display.percent(r.settings().confidence()) + " interval", "verdict"));
+        for (Finding f : r.findings()) {
+            Claim c = f.claim();
+            String label = c.tableId() + ": " + c.label();
+            if (label.length() > 36) label = label.substring(0, 35) + "…";
+            boolean ok = f.verdict() != Verdict.NOT_COMPUTABLE;
+            sb.append(String.format(Locale.ROOT, fmt, label, c.metric(), c.value().text(),
+                    ok ? Display.value(c, f.estimate()) : "n/a",
+                    ok ? Display.range(c, f.interval().lower(), f.interval().upper()) : "n/a",
+                    f.verdict().word()));
+        }
+        sb.append(String.format(Locale.ROOT, "%n%d consistent, %d inconclusive, %d discrepant", r.count(Verdict.CONSISTENT),
+                r.count(Verdict.INCONCLUSIVE), r.count(Verdict.DISCREPANT)));
+        if (r.count(Verdict.NOT_COMPUTABLE) > 0) sb.append(", ").append(r.count(Verdict.NOT_COMPUTABLE)).append(" not computable");
+        if (!r.unaudited().isEmpty()) sb.append(", ").append(r.unaudited().size()).append(" not audited");
+        return sb.append('\n').toString();
+    }
+}
