@@ -39,7 +39,11 @@ final class BootstrapBinomialSampler {
 
     /** One count; {@code rng} supplies the single uniform in [0, 1). */
     int draw(SplittableRandom rng) {
-        double u = rng.nextDouble();
+        return inverse(rng.nextDouble());
+    }
+
+    /** The smallest count x with F(x) &gt; u, for u in [0, 1). */
+    int inverse(double u) {
         int lo = 0;
         int hi = cumulative.length - 1;
         while (lo < hi) { // smallest j with cumulative[j] > u

@@ -3,6 +3,8 @@ package org.assay.stats;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.SplittableRandom;
+import org.apache.commons.math3.distribution.BinomialDistribution;
 import org.assay.stats.BootstrapTestStatistics.WeightedMean;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -44,5 +46,20 @@ class BootstrapCountShortcutTest {
         assertThat(count.percentile(0.95).upper()).isCloseTo(full.percentile(0.95).upper(), within(step + 1e-12));
         assertThat(count.bca(0.95).lower()).isCloseTo(full.bca(0.95).lower(), within(step + 1e-12));
         assertThat(count.bca(0.95).upper()).isCloseTo(full.bca(0.95).upper(), within(step + 1e-12));
+    }
+
+    // The tabulated inversion gives the same counts as Commons Math 3.6.1
+    // BinomialDistribution.inverseCumulativeProbability (smallest x with F(x) >= u; the two rules
+    // differ only when u equals F(x) exactly).
+    @ParameterizedTest(name = "n={0}, p={1}")
+    @CsvSource({"400, 0.85", "60, 0.2", "400, 0.97", "100000, 0.5", "1000, 0.001"})
+    void tabulatedInverseMatchesCommonsMath(int n, double p) {
+        BootstrapBinomialSampler sampler = new BootstrapBinomialSampler(n, p);
+        BinomialDistribution binomial = new BinomialDistribution(null, n, p);
+        SplittableRandom rng = new SplittableRandom(99L);
+        for (int i = 0; i < 5000; i++) {
+            double u = rng.nextDouble();
+            assertThat(sampler.inverse(u)).as("u = %s", u).isEqualTo(binomial.inverseCumulativeProbability(u));
+        }
     }
 }
