@@ -88,19 +88,32 @@ final class DelimitedRowSource implements RowSource {
     }
 
     private boolean advance() {
+        int start = line + 1;
         try {
             if (!rows.hasNextValue()) return false;
             // After hasNextValue the parser stands at the start of the record: its line is the
             // record's first line even when a quoted field spans several lines.
-            line = parser.currentLocation().getLineNr();
+            start = parser.currentLocation().getLineNr();
             current = rows.nextValue();
+            line = start;
             return true;
         } catch (JsonProcessingException e) {
-            throw RowErrors.syntax(file, line, e,
-                    "check the quoting: a quoted field must end with a closing double quote (RFC 4180)");
+            throw syntaxError(start, e);
         } catch (IOException e) {
             throw RowErrors.unreadable(file, e);
         }
+    }
+
+    /** A malformed record, reported at the line it starts on (Jackson notices at its end). */
+    private UserInputException syntaxError(int start, JsonProcessingException e) {
+        UserInputException fromReader = RowErrors.userErrorCause(e);
+        if (fromReader != null) return fromReader;   // bad UTF-8, wrapped by Jackson
+        long noticed = e.getLocation() == null ? -1 : e.getLocation().getLineNr();
+        return new UserInputException(file, RowErrors.line(start),
+                "cannot parse the row: " + e.getOriginalMessage()
+                        + (noticed > start ? " (noticed on line " + noticed + ")" : ""),
+                "check the quoting: a quoted field must end with a closing double quote,"
+                        + " and a quote inside it must be doubled (RFC 4180)", e);
     }
 
     @Override

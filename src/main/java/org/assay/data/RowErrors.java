@@ -1,6 +1,5 @@
 package org.assay.data;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
 import org.assay.common.UserInputException;
 
 import java.nio.file.Path;
@@ -23,10 +22,11 @@ final class RowErrors {
                 "check that the file exists and is readable", e);
     }
 
-    /** A syntax error reported by Jackson, at the line Jackson reports. */
-    static UserInputException syntax(Path file, long fallbackLine, JsonProcessingException e, String fix) {
-        long line = e.getLocation() != null && e.getLocation().getLineNr() > 0
-                ? e.getLocation().getLineNr() : fallbackLine;
-        return new UserInputException(file, line(line), "cannot parse: " + e.getOriginalMessage(), fix, e);
+    /** The {@link UserInputException} a library wrapped, if any (our reader throws it mid-parse). */
+    static UserInputException userErrorCause(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof UserInputException) return (UserInputException) t;
+        }
+        return null;
     }
 }
