@@ -6,14 +6,13 @@ import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.cfg.JsonNodeFeature;
 import org.assay.common.UserInputException;
 
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -37,7 +36,7 @@ final class JsonLinesRowSource implements RowSource {
             .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .nodeFactory(JsonNodeFactory.withExactBigDecimals(true))
+            .disable(JsonNodeFeature.STRIP_TRAILING_BIGDECIMAL_ZEROES)
             .build();
     private final List<String> columns;
     private final Map<String, Integer> index = new LinkedHashMap<>();
@@ -119,11 +118,9 @@ final class JsonLinesRowSource implements RowSource {
                     "write one JSON object per line, such as {\"id\": \"x1\", \"label\": \"cat\", ...}");
         }
         Map<String, String> fields = new LinkedHashMap<>();
-        for (Iterator<Map.Entry<String, JsonNode>> it = node.fields(); it.hasNext(); ) {
-            Map.Entry<String, JsonNode> field = it.next();
+        for (Map.Entry<String, JsonNode> field : node.properties()) {
             if (field.getKey().equals(PROBABILITIES) && field.getValue().isObject()) {
-                for (Iterator<Map.Entry<String, JsonNode>> p = field.getValue().fields(); p.hasNext(); ) {
-                    Map.Entry<String, JsonNode> entry = p.next();
+                for (Map.Entry<String, JsonNode> entry : field.getValue().properties()) {
                     String name = options.probabilityPrefix() + entry.getKey();
                     String path = PROBABILITIES + "." + entry.getKey();
                     if (fields.containsKey(name)) {
@@ -165,7 +162,7 @@ final class JsonLinesRowSource implements RowSource {
                     "field '" + name + "' must be a JSON number, found " + value,
                     "write the value as a number without quotes, such as 0.25");
         }
-        // Exact big decimals keep the written scale: BigDecimal("1.0").toString() is "1.0".
+        // Big decimals with trailing zeros kept keep the written scale: BigDecimal("1.0").toString() is "1.0".
         return value.isBigDecimal() ? value.decimalValue().toString() : value.asText();
     }
 
