@@ -1,0 +1,133 @@
+package org.assay.data;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import org.assay.common.UserInputException;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Comma- or tab-separated rows read with jackson-dataformat-csv. Quoting follows RFC 4180
+ * (common practice): a field in double quotes may hold the separator, a newline, or a doubled
+ * quote; the same quoting is accepted in tab-separated files. Blank lines are skipped (they hold
+ * no row).
+ *
+ * <p>The header is read as the first record rather than through {@code CsvSchema.withHeader()}:
+ * the header schema maps each row to named fields and so cannot report a row with too few fields
+ * or a header that repeats a name, and both must be errors here.
+ */
+final class DelimitedRowSource implements RowSource {
+    private final Path file;
+    private final Reader reader;
+    private final MappingIterator<String[]> rows;
+    private final CsvParser parser;
+    private final List<String> columns;
+    private final int headerLine;
+    private final char separator;
+    private String[] current;
+    private int line;
+
+    DelimitedRowSource(Path file, Reader reader, char separator) {
+        this.file = file;
+        this.reader = reader;
+        this.separator = separator;
+        CsvSchema schema = CsvSchema.emptySchema().withColumnSeparator(separator);
+        try {
+            this.rows = new CsvMapper().readerFor(String[].class)
+                    .with(schema)
+                    .with(CsvParser.Feature.WRAP_AS_ARRAY)
+                    .with(CsvParser.Feature.SKIP_EMPTY_LINES)
+                    .readValues(reader);
+        } catch (IOException e) {
+            throw RowErrors.unreadable(file, e);
+        }
+        this.parser = (CsvParser) rows.getParser();
+        if (!advance()) throw RowErrors.empty(file, "file");
+        this.headerLine = line;
+        this.columns = List.of(current);
+        checkHeader();
+    }
+
+    private void checkHeader() {
+        Map<String, Integer> seen = new HashMap<>();
+        for (int i = 0; i < columns.size(); i++) {
+            Integer before = seen.putIfAbsent(columns.get(i), i);
+            if (before != null) {
+                throw new UserInputException(file, RowErrors.line(headerLine),
+                        "the header names column '" + columns.get(i) + "' twice (fields "
+                                + (before + 1) + " and " + (i + 1) + ")",
+                        "give every column a distinct name");
+            }
+        }
+    }
+
+    @Override public Path file() { return file; }
+    @Override public List<String> columns() { return columns; }
+    @Override public int line() { return line; }
+    @Override public int headerLine() { return headerLine; }
+
+    @Override
+    public boolean next() {
+        if (!advance()) return false;
+        if (current.length != columns.size()) {
+            String name = separator == '\t' ? "tab" : "comma";
+            throw new UserInputException(file, RowErrors.line(line),
+                    "this row has " + current.length + " fields but the header has " + columns.size(),
+                    "quote fields that contain a " + name + " or a line break in double quotes"
+                            + " (RFC 4180), or add the missing fields");
+        }
+        return true;
+    }
+
+    private boolean advance() {
+        int start = line + 1;
+        try {
+            if (!rows.hasNextValue()) return false;
+            // After hasNextValue the parser stands at the start of the record: its line is the
+            // record's first line even when a quoted field spans several lines.
+            start = parser.currentLocation().getLineNr();
+            current = rows.nextValue();
+            line = start;
+            return true;
+        } catch (JsonProcessingException e) {
+            throw syntaxError(start, e);
+        } catch (IOException e) {
+            throw RowErrors.unreadable(file, e);
+        }
+    }
+
+    /** A malformed record, reported at the line it starts on (Jackson notices at its end). */
+    private UserInputException syntaxError(int start, JsonProcessingException e) {
+        UserInputException fromReader = RowErrors.userErrorCause(e);
+        if (fromReader != null) return fromReader;   // bad UTF-8, wrapped by Jackson
+        long noticed = e.getLocation() == null ? -1 : e.getLocation().getLineNr();
+        return new UserInputException(file, RowErrors.line(start),
+                "cannot parse the row: " + e.getOriginalMessage()
+                        + (noticed > start ? " (noticed on line " + noticed + ")" : ""),
+                "check the quoting: a quoted field must end with a closing double quote,"
+                        + " and a quote inside it must be doubled (RFC 4180)", e);
+    }
+
+    @Override
+    public String value(int column) {
+        return current[column];
+    }
+
+    @Override
+    public void close() {
+        try {
+            rows.close();
+            reader.close();
+        } catch (IOException e) {
+            throw RowErrors.unreadable(file, e);
+        }
+    }
+}

@@ -1,0 +1,178 @@
+package org.assay.data;
+
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.cfg.JsonNodeFeature;
+import org.assay.common.UserInputException;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One JSON object per line (JSON Lines), parsed a line at a time with Jackson databind.
+ *
+ * <p>A field named {@value #PROBABILITIES} holding an object {@code {class: p}} is flattened into
+ * fields {@code <prefix><class>}, so it reads like the {@code p_<class>} columns of a CSV file.
+ * The first object fixes the set of fields; every later line must have the same ones (the
+ * analogue of a ragged row). Numbers keep the text they were written with ({@code 1.0} stays
+ * {@code "1.0"}), so labels compare as written. Blank lines are skipped.
+ */
+final class JsonLinesRowSource implements RowSource {
+    static final String PROBABILITIES = "probabilities";
+
+    private final Path file;
+    private final BufferedReader reader;
+    private final ReadOptions options;
+    private final ObjectMapper mapper = JsonMapper.builder()
+            .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            .disable(JsonNodeFeature.STRIP_TRAILING_BIGDECIMAL_ZEROES)
+            .build();
+    private final List<String> columns;
+    private final Map<String, Integer> index = new LinkedHashMap<>();
+    private final int headerLine;
+    private String[] current;
+    private Map<String, String> pending;   // the first object, read ahead to learn the columns
+    private int lineNumber;
+    private int line;
+
+    JsonLinesRowSource(Path file, Reader reader, ReadOptions options) {
+        this.file = file;
+        this.reader = new BufferedReader(reader);
+        this.options = options;
+        pending = readObject();
+        if (pending == null) throw RowErrors.empty(file, "file");
+        headerLine = lineNumber;
+        columns = List.copyOf(pending.keySet());
+        for (int i = 0; i < columns.size(); i++) index.put(columns.get(i), i);
+    }
+
+    @Override public Path file() { return file; }
+    @Override public List<String> columns() { return columns; }
+    @Override public int line() { return line; }
+    @Override public int headerLine() { return headerLine; }
+    @Override public String value(int column) { return current[column]; }
+
+    @Override
+    public boolean next() {
+        Map<String, String> fields = pending != null ? pending : readObject();
+        pending = null;
+        if (fields == null) return false;
+        line = lineNumber;
+        String[] values = new String[columns.size()];
+        for (Map.Entry<String, String> field : fields.entrySet()) {
+            Integer at = index.get(field.getKey());
+            if (at == null) {
+                throw new UserInputException(file, RowErrors.line(line),
+                        "field '" + field.getKey() + "' is not on line " + headerLine
+                                + ", the first object",
+                        "give every line the same fields");
+            }
+            values[at] = field.getValue();
+        }
+        for (int i = 0; i < values.length; i++) {
+            if (values[i] == null) {
+                throw new UserInputException(file, RowErrors.line(line),
+                        "field '" + columns.get(i) + "' is missing; line " + headerLine + " has it",
+                        "give every line the same fields");
+            }
+        }
+        current = values;
+        return true;
+    }
+
+    /** Reads the next non-blank line as a flat field map; null at the end of the file. */
+    private Map<String, String> readObject() {
+        String text;
+        try {
+            do {
+                text = reader.readLine();
+                if (text == null) return null;
+                lineNumber++;
+            } while (text.isBlank());
+        } catch (IOException e) {
+            throw RowErrors.unreadable(file, e);
+        }
+        JsonNode node;
+        try {
+            node = mapper.readTree(text);
+        } catch (JsonProcessingException e) {
+            // Jackson counts lines within the one line it was given; report the file line.
+            throw new UserInputException(file, RowErrors.line(lineNumber),
+                    "not valid JSON: " + e.getOriginalMessage(),
+                    "write one complete JSON object per line", e);
+        }
+        if (!node.isObject()) {
+            throw new UserInputException(file, RowErrors.line(lineNumber),
+                    "expected a JSON object, found " + node.getNodeType().toString().toLowerCase(),
+                    "write one JSON object per line, such as {\"id\": \"x1\", \"label\": \"cat\", ...}");
+        }
+        Map<String, String> fields = new LinkedHashMap<>();
+        for (Map.Entry<String, JsonNode> field : node.properties()) {
+            if (field.getKey().equals(PROBABILITIES) && field.getValue().isObject()) {
+                for (Map.Entry<String, JsonNode> entry : field.getValue().properties()) {
+                    String name = options.probabilityPrefix() + entry.getKey();
+                    String path = PROBABILITIES + "." + entry.getKey();
+                    if (fields.containsKey(name)) {
+                        throw new UserInputException(file, RowErrors.line(lineNumber),
+                                "class '" + entry.getKey() + "' has a probability both in '" + name
+                                        + "' and in '" + path + "'",
+                                "give each class's probability once");
+                    }
+                    fields.put(name, scalar(path, entry.getValue(), true));
+                }
+            } else {
+                String name = field.getKey();
+                if (fields.containsKey(name)) {
+                    throw new UserInputException(file, RowErrors.line(lineNumber),
+                            "field '" + name + "' is given twice (also inside '" + PROBABILITIES + "')",
+                            "give each class's probability once");
+                }
+                fields.put(name, scalar(name, field.getValue(), isNumeric(name)));
+            }
+        }
+        return fields;
+    }
+
+    private boolean isNumeric(String name) {
+        return name.equals(options.scoreColumn()) || name.startsWith(options.probabilityPrefix());
+    }
+
+    /** The text of a scalar field; "" for null. */
+    private String scalar(String name, JsonNode value, boolean numeric) {
+        if (value.isNull()) return "";
+        if (value.isContainerNode()) {
+            throw new UserInputException(file, RowErrors.line(lineNumber),
+                    "field '" + name + "' holds " + (value.isArray() ? "an array" : "an object")
+                            + " where a single value belongs",
+                    "write a string or a number there");
+        }
+        if (numeric && !value.isNumber()) {
+            throw new UserInputException(file, RowErrors.line(lineNumber),
+                    "field '" + name + "' must be a JSON number, found " + value,
+                    "write the value as a number without quotes, such as 0.25");
+        }
+        // Big decimals with trailing zeros kept keep the written scale: BigDecimal("1.0").toString() is "1.0".
+        return value.isBigDecimal() ? value.decimalValue().toString() : value.asText();
+    }
+
+    @Override
+    public void close() {
+        try {
+            reader.close();
+        } catch (IOException e) {
+            throw RowErrors.unreadable(file, e);
+        }
+    }
+
+}
