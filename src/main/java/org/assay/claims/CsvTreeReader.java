@@ -189,12 +189,16 @@ final class CsvTreeReader {
         List<Row> rows = new ArrayList<>();
         try (JsonParser parser = FACTORY.createParser(text)) {
             try {
-                JsonToken token;
-                while ((token = parser.nextToken()) != null) {
-                    if (token != JsonToken.START_ARRAY) continue;
-                    int line = parser.currentTokenLocation().getLineNr();
+                // WRAP_AS_ARRAY gives one outer array holding one array per row. The location of a
+                // row's START_ARRAY is stale, so a row's line is that of its first cell.
+                if (parser.nextToken() != JsonToken.START_ARRAY) return rows;
+                while (parser.nextToken() == JsonToken.START_ARRAY) {
+                    int line = 0;
                     List<String> cells = new ArrayList<>();
-                    while (parser.nextToken() != JsonToken.END_ARRAY) cells.add(parser.getText());
+                    while (parser.nextToken() != JsonToken.END_ARRAY) {
+                        if (cells.isEmpty()) line = parser.currentTokenLocation().getLineNr();
+                        cells.add(parser.getText());
+                    }
                     rows.add(new Row(line, cells));
                 }
             } catch (JsonProcessingException e) {
