@@ -91,7 +91,7 @@ final class ClaimsTreeMapper {
         Integer testSize = optionalWhole(t, at, "test_size", what, 1,
                 "write the number of test items as a whole number, or null when unknown");
         Integer runsValue = optionalWhole(t, at, "runs", what, 1,
-                "write how many runs were averaged, a whole number of at least 1 (default 1)");
+                "write how many runs were averaged, a whole number of at least 1; the default is 1");
         int runs = runsValue == null ? 1 : runsValue;
         Scale tableScale = optionalScale(t, at);
         BigDecimal tableMargin = optionalNumber(t, at, "margin", what, true);
@@ -216,7 +216,7 @@ final class ClaimsTreeMapper {
         if (!given) {
             if (!hasPm) return null;
             throw fail(c.entry("pm").value(), at.appendProperty("pm"), "pm is given without pm_kind",
-                    "add pm_kind: " + allowed + " (unknown when the paper does not say)");
+                    "add pm_kind: " + allowed + "; unknown when the paper does not say");
         }
         JsonPointer kindAt = at.appendProperty("pm_kind");
         if (!hasPm) {

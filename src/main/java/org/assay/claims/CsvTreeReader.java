@@ -180,7 +180,7 @@ final class CsvTreeReader {
             throw new UserInputException(file, "line " + header.line(),
                     "the header lacks the column" + (missing.size() > 1 ? "s " : " ") + String.join(", ", missing),
                     "the header needs " + String.join(",", REQUIRED_COLUMNS)
-                            + " (caption, page and margin are optional); leave cells empty where unknown");
+                            + "; caption, page and margin are optional; leave cells empty where unknown");
         }
         return index;
     }

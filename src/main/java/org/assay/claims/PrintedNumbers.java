@@ -45,7 +45,7 @@ final class PrintedNumbers {
         if (t.endsWith("%")) {
             String bare = t.substring(0, t.length() - 1).strip();
             throw new NumberProblem(what + " " + quoted + " contains a percent sign",
-                    "drop the % and set scale: percent (write \"" + bare + "\")");
+                    "drop the % and set scale: percent, writing " + bare);
         }
         if (t.contains("±") || t.contains("+-") || t.contains("+/-")) {
             throw new NumberProblem(what + " " + quoted + " contains a ± part",
@@ -57,7 +57,7 @@ final class PrintedNumbers {
         }
         if (t.chars().anyMatch(Character::isWhitespace)) {
             throw new NumberProblem(what + " " + quoted + " contains a space inside the number",
-                    "remove the space (" + t.replaceAll("\\s+", "") + ") or check the number against the paper");
+                    "remove the space, writing " + t.replaceAll("\\s+", "") + ", or check the number against the paper");
         }
         if (t.startsWith("\u2212") || t.startsWith("\u2013")) {
             throw new NumberProblem(what + " " + quoted + " starts with a typographic minus or dash",

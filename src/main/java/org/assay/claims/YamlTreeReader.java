@@ -137,7 +137,8 @@ final class YamlTreeReader {
             if (event instanceof ScalarEvent s) tag = s.getTag();
             else if (event instanceof CollectionStartEvent c) tag = c.getTag();
             if (tag != null && !ALLOWED_EXPLICIT_TAGS.contains(tag)) {
-                String shown = tag.startsWith(CORE) ? "!!" + tag.substring(CORE.length()) : tag;
+                String shown = tag.startsWith(CORE) ? "!!" + tag.substring(CORE.length())
+                        : tag.startsWith("!") ? tag : "!<" + tag + ">";
                 throw new UserInputException(file, "line " + lastLine, "the YAML tag " + shown + " is not allowed",
                         "remove the tag; a claims file holds only plain strings, numbers, lists and mappings");
             }
@@ -149,13 +150,16 @@ final class YamlTreeReader {
     private static final class Converter {
         private final Path file;
         private int nodes;
+        /** Line of the top-level entry being converted: where an expansion bomb is set off. */
+        private int topLine;
 
         Converter(Path file) { this.file = file; }
 
         TreeNode convert(Node node, int depth) {
             int line = node.getStartMark().getLine() + 1;
+            if (depth == 2) topLine = line;
             if (++nodes > InputLimits.MAX_EXPANDED_NODES) {
-                throw new UserInputException(file, "line " + line,
+                throw new UserInputException(file, "line " + topLine,
                         "the YAML expands to more than " + InputLimits.MAX_EXPANDED_NODES
                                 + " values through aliases; the file may be an alias bomb",
                         "write the values out instead of repeating them with *aliases");
