@@ -482,6 +482,16 @@ class ClaimsValidationTest {
     }
 
     @Test
+    void jsonDuplicateKey() {
+        UserInputException e = rejected(write(dir, "claims.json", """
+                {"tables": [{"id": "T1", "claims": [
+                  {"metric": "accuracy", "value": "50.0",
+                   "value": "60.0", "scale": "percent"}]}]}
+                """));
+        assertNames(e, "claims.json", "/tables/0/claims/0/value (line 3)", "appears twice in one object (first at line 2)", "keep one");
+    }
+
+    @Test
     void jsonWithTrailingContent() {
         UserInputException e = rejected(write(dir, "claims.json", """
                 {"tables": []}
