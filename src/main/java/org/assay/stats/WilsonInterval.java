@@ -6,8 +6,9 @@ package org.assay.stats;
  * JASA 22:209&ndash;212.
  *
  * <p>Conventions (same as statsmodels 0.13 {@code proportion_confint(method="wilson")}): the
- * closed form needs no clipping; at k = 0 the lower bound is 0 and at k = n the upper bound is 1
- * up to rounding, which is removed by clipping to [0, 1].
+ * closed form needs no clipping. At k = 0 the lower bound is 0 and at k = n the upper bound is 1
+ * exactly in real arithmetic; they are set exactly so that rounding (e.g. 0.9999999999999999 at
+ * 30/30) cannot leave the estimate outside its own interval.
  */
 final class WilsonInterval implements ProportionInterval {
     static final String METHOD = "Wilson score";
@@ -22,7 +23,8 @@ final class WilsonInterval implements ProportionInterval {
         double denominator = 1 + z2 / n;
         double centre = (p + z2 / (2 * n)) / denominator;
         double half = z * Math.sqrt(p * (1 - p) / n + z2 / (4 * n * n)) / denominator;
-        return new Interval(ProportionChecks.clip01(centre - half), ProportionChecks.clip01(centre + half),
-                confidence, METHOD);
+        double lower = successes == 0 ? 0 : ProportionChecks.clip01(centre - half);
+        double upper = successes == trials ? 1 : ProportionChecks.clip01(centre + half);
+        return new Interval(lower, upper, confidence, METHOD);
     }
 }
