@@ -28,15 +28,13 @@ final class ClaimAssessor {
         double est = evidence.estimate();
         double difference = est < lo ? est - lo : est > hi ? est - hi : 0;
         double p = evidence.pValue(lo, hi);
-        List<String> notes = new ArrayList<>(evidence.notes());
+        List<String> notes = new ArrayList<>(evidence.claimNotes(lo, hi));
+        notes.addAll(evidence.notes());
         notes.addAll(tableNotes);
         Finding f = new Finding(claim, null, lo, hi, n, population, est, interval, equivalence,
                 evidence.rangeIfTrue(lo, hi, conf), p, p, margin, difference, null, null, notes);
         Verdict v = verdict(f);
         Long settle = v == Verdict.INCONCLUSIVE ? itemsToSettle(evidence, n, population, lo, hi, margin) : null;
-        if (v == Verdict.INCONCLUSIVE && settle == null) {
-            notes.add("the reproduced value itself lies outside the margin band, so no subsample size would show agreement");
-        }
         return copy(f, v, p, settle);
     }
 

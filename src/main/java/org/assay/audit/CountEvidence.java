@@ -62,6 +62,16 @@ final class CountEvidence implements Evidence {
     }
 
     @Override
+    public List<String> claimNotes(double lo, double hi) {
+        if (population == null) return List.of();
+        long kMin = (long) Math.ceil(lo * population - 1e-9);
+        long kMax = (long) Math.floor(hi * population + 1e-9);
+        if (kMin <= kMax) return List.of();
+        return List.of("no count out of " + population + " items falls in the claim's rounding interval; it was tested "
+                + "against the nearest achievable values " + kMax + "/" + population + " and " + kMin + "/" + population);
+    }
+
+    @Override
     public double pValue(double lo, double hi) {
         if (population != null) {
             long[] range = populationCounts(lo, hi);

@@ -25,9 +25,15 @@ final class Estimator {
             return new AucEvidence(DeLong.of(metric.scores(), metric.positive()), n, population);
         }
         BootstrapEngine engine = new BootstrapEngine(settings.resamples(), settings.seed(), settings.threads());
-        var raw = kind == MetricKind.COUNT
-                ? engine.runCount(metric.successes(), n)
-                : engine.run(metric.statistic());
-        return new BootstrapEvidence(raw, choice, n, population);
+        try {
+            var raw = kind == MetricKind.COUNT
+                    ? engine.runCount(metric.successes(), n)
+                    : engine.run(metric.statistic());
+            return new BootstrapEvidence(raw, choice, n, population);
+        } catch (IllegalArgumentException e) {
+            // the metric is undefined on some resample (for example a class missing from it)
+            throw org.assay.common.UserInputException.usage(metric.definition().id() + " cannot be bootstrapped on these "
+                    + n + " examples: " + e.getMessage(), "evaluate more examples, or choose another --interval");
+        }
     }
 }

@@ -30,4 +30,7 @@ interface Evidence {
 
     /** Notes on how the evidence was computed (shortcuts used, corrections applied). */
     java.util.List<String> notes();
+
+    /** Notes about one claim tested against this evidence (for example a claim no count can produce). */
+    default java.util.List<String> claimNotes(double lo, double hi) { return java.util.List.of(); }
 }

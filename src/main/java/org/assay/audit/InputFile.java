@@ -12,6 +12,13 @@ import org.assay.common.UserInputException;
 /** A file the audit read, with its SHA-256, so a report says exactly what was run on what. */
 public record InputFile(String role, Path path, long bytes, String sha256) {
 
+    /** The path relative to the working folder when it lies inside it, so reports travel well. */
+    private static Path display(Path path) {
+        Path abs = path.toAbsolutePath().normalize();
+        Path cwd = Path.of("").toAbsolutePath();
+        return abs.startsWith(cwd) ? cwd.relativize(abs) : abs;
+    }
+
     static InputFile of(String role, Path path) {
         try (InputStream in = Files.newInputStream(path)) {
             MessageDigest md = MessageDigest.getInstance("SHA-256");
@@ -21,7 +28,7 @@ public record InputFile(String role, Path path, long bytes, String sha256) {
                 md.update(buf, 0, r);
                 total += r;
             }
-            return new InputFile(role, path, total, HexFormat.of().formatHex(md.digest()));
+            return new InputFile(role, display(path), total, HexFormat.of().formatHex(md.digest()));
         } catch (IOException e) {
             throw new UserInputException(path, null, "cannot read file: " + e.getMessage(), "check the path");
         } catch (NoSuchAlgorithmException e) {

@@ -75,7 +75,7 @@ final class MeasureCommand implements Callable<Integer> {
         List<Measurement> results = new Measurer(estimation.settings()).measure(data, requests, testSize);
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        data.warnings().forEach(w -> err.println("assay: warning: " + w));
+        data.warnings().forEach(w -> err.println("assay: " + w));
         out.print(format.equals("json") ? json(data, results) : text(results));
         out.flush();
         return Main.DONE;

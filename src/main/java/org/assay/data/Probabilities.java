@@ -7,8 +7,12 @@ import java.util.Optional;
 
 /** Per-class probabilities: reordering to class codes, arg-max, and the sum-to-one check. */
 final class Probabilities {
-    /** Allowed distance of a row's sum from 1 before it is reported. */
-    static final double SUM_TOLERANCE = 1e-6;
+    /**
+     * Allowed distance of a row's sum from 1 before it is reported. Probabilities are usually
+     * written rounded (to 4-6 decimals), so a row of K rounded values can miss 1 by K half-units;
+     * 0.001 tolerates that for any realistic K while still catching logits or unnormalised scores.
+     */
+    static final double SUM_TOLERANCE = 1e-3;
 
     private Probabilities() {}
 
@@ -72,6 +76,7 @@ final class Probabilities {
         if (off == 0) return Optional.empty();
         return Optional.of("WARNING " + file + ", line " + rows.line(worst) + ": probabilities do not sum to 1 (within "
                 + SUM_TOLERANCE + ") in " + off + " of " + rows.size() + " rows; the furthest, on line "
-                + rows.line(worst) + ", sums to " + worstSum);
+                + rows.line(worst) + ", sums to " + String.format(java.util.Locale.ROOT, "%.6g", worstSum)
+                + " (check that these are probabilities, not logits or scores)");
     }
 }

@@ -30,7 +30,7 @@ final class Display {
     }
 
     static String percent(double confidence) {
-        double v = confidence * 100;
+        double v = Math.round(confidence * 100 * 1e6) / 1e6;   // 0.9 * 100 is 90.00000000000001
         return v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f%%", v) : String.format(Locale.ROOT, "%.1f%%", v);
     }
 }

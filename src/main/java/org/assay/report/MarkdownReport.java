@@ -76,6 +76,11 @@ public final class MarkdownReport {
                     .append(" interval | Range if claim true | p | Holm p | Verdict |\n");
             sb.append("|---|---|---:|---|---:|---|---|---:|---:|---|\n");
             List<String> notes = new ArrayList<>();
+            // notes every computed finding of the table shares are method notes, listed once;
+            // the others belong to their claim and are shown with it
+            List<Finding> computed = fs.stream().filter(f -> f.verdict() != Verdict.NOT_COMPUTABLE).toList();
+            List<String> shared = computed.isEmpty() ? List.of() : computed.get(0).notes().stream()
+                    .filter(n -> computed.stream().allMatch(f -> f.notes().contains(n))).toList();
             for (Finding f : fs) {
                 Claim c = f.claim();
                 sb.append("| ").append(cell(c.label())).append(" | ").append(metricLabel(c)).append(" | ")
@@ -92,11 +97,13 @@ public final class MarkdownReport {
                         .append(Display.range(c, f.rangeIfTrue()[0], f.rangeIfTrue()[1])).append(" | ")
                         .append(Display.p(f.pValue())).append(" | ").append(Display.p(f.adjustedP())).append(" | **")
                         .append(f.verdict().word()).append("** |\n");
-                notes.add(note(f));
+                StringBuilder own = new StringBuilder(note(f));
+                f.notes().stream().filter(n -> !shared.contains(n)).forEach(n -> own.append(" Note: ").append(cell(n)).append('.'));
+                notes.add(own.toString());
             }
             sb.append("\n### Reproduction notes\n\n");
             notes.forEach(n -> sb.append(n).append("\n"));
-            List<String> methodNotes = fs.stream().flatMap(f -> f.notes().stream()).distinct().toList();
+            List<String> methodNotes = shared;
             if (!methodNotes.isEmpty()) {
                 sb.append("\nMethod notes:\n\n");
                 methodNotes.forEach(n -> sb.append("- ").append(cell(n)).append("\n"));
@@ -132,6 +139,9 @@ public final class MarkdownReport {
                 if (f.itemsToSettle() != null) {
                     sb.append(" About ").append(f.itemsToSettle()).append(" items would settle it if the reproduced value held"
                             + " (normal approximation).");
+                } else if (Math.abs(f.difference()) >= f.margin()) {
+                    sb.append(" The reproduced value lies outside the margin, so no larger subsample would show agreement;"
+                            + " more items would show whether the difference is real.");
                 }
             }
             default -> { }

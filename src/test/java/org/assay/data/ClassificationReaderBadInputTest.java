@@ -181,7 +181,7 @@ class ClassificationReaderBadInputTest {
         assertThat(data.warnings()).hasSize(1);
         assertThat(data.warnings().get(0))
                 .startsWith("WARNING ")
-                .contains("sums.csv", "line 4", "3 of 5 rows", "sums to 0.30000000000000004");
+                .contains("sums.csv", "line 4", "3 of 5 rows", "sums to 0.300000");
     }
 
     @Test
