@@ -25,10 +25,10 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code assay audit}: claims versus a reproduction, claim by claim. */
 @Command(name = "audit", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Tests each claim of a results table against your reproduced predictions and writes",
-            "report.md and report.json: the reproduced value with its interval, the claim's rounding",
-            "interval, a p-value (Holm-adjusted across the audit) and a verdict: consistent,",
-            "inconclusive or discrepant.", ""},
+        description = {"Tests each claim of a results table against your reproduced predictions.",
+            "Writes report.md and report.json: the reproduced value with its interval, the claim's rounding "
+                + "interval, a p-value (Holm-adjusted across the audit) and a verdict: consistent, "
+                + "inconclusive or discrepant.", ""},
         footer = {"", "Examples:",
             "  assay audit --claims claims.yaml --predictions preds.csv --manifest subsample.txt \\",
             "      --table T2 --row \"ChirpNet (ours)\" --positive 1 --out audit-report",
@@ -85,6 +85,7 @@ final class AuditCommand implements Callable<Integer> {
         files.put("report.json", JsonReport.render(result, Main.version()));
         List<Path> written = new OutputDirectory(out, force).write(files);
         var stdout = spec.commandLine().getOut();
+        result.warnings().forEach(w -> spec.commandLine().getErr().println("assay: " + w));
         stdout.print(SummaryTable.render(result));
         for (Path p : written) stdout.println("wrote " + p);
         stdout.flush();

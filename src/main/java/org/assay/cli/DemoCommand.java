@@ -28,9 +28,10 @@ import picocli.CommandLine.Model.CommandSpec;
  * and audits it, so a new user sees a whole report in one command.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = {"Runs an audit on a bundled, invented example: a bird-call classifier's paper claims",
-            "accuracy, macro F1, top-3 accuracy and ROC AUC on 4,000 clips; a replicator re-ran it on",
-            "a random 400-clip subsample. Writes the inputs and report.md / report.json to --out.", ""},
+        description = {"Audits a bundled, invented example and writes its report.",
+            "A bird-call classifier's paper claims accuracy, macro F1, top-3 accuracy and ROC AUC on 4,000 "
+                + "clips; a replicator re-ran it on a random 400-clip subsample. Writes the inputs and "
+                + "report.md / report.json to --out.", ""},
         footer = {"", "Example:", "  assay demo --out assay-demo && less assay-demo/report.md"})
 final class DemoCommand implements Callable<Integer> {
     static final List<String> FILES = List.of("claims.yaml", "audit.yaml", "predictions.csv", "subsample.txt", "README.md");

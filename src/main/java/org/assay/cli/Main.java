@@ -17,9 +17,9 @@ import picocli.CommandLine.Option;
         mixinStandardHelpOptions = true,
         versionProvider = Main.Version.class,
         description = {
-            "Audits reported machine-learning results: recomputes each claimed metric from your",
-            "per-example predictions with an interval, and says claim by claim whether your",
-            "reproduction is consistent with the printed value.",
+            "Audits reported machine-learning results: recomputes each claimed metric from your "
+                + "per-example predictions with an interval, and says claim by claim whether your "
+                + "reproduction is consistent with the printed value.",
             ""},
         subcommands = {AuditCommand.class, MeasureCommand.class, DemoCommand.class,
                 CommandLine.HelpCommand.class},
