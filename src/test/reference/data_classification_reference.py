@@ -17,7 +17,7 @@ import numpy
 import sklearn
 from sklearn.preprocessing import LabelEncoder
 
-DATA = pathlib.Path("src/test/resources/data")
+DATA = pathlib.Path(__file__).resolve().parent.parent / "resources" / "data"
 
 
 def read_rows(name):
