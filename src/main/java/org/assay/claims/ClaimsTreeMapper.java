@@ -21,9 +21,10 @@ import org.assay.common.UserInputException;
 final class ClaimsTreeMapper {
     static final List<String> TOP_FIELDS = List.of("source", "tables");
     static final List<String> SOURCE_FIELDS = List.of("title", "document");
-    static final List<String> TABLE_FIELDS = List.of("id", "caption", "test_size", "runs", "scale", "margin", "claims");
+    static final List<String> TABLE_FIELDS = List.of("id", "caption", "test_size", "runs", "scale", "margin", "class_counts", "compare", "claims");
     static final List<String> CLAIM_FIELDS =
-            List.of("row", "column", "metric", "params", "value", "scale", "pm", "pm_kind", "page", "margin");
+            List.of("row", "column", "metric", "params", "value", "scale", "pm", "pm_kind", "page", "margin", "test_size",
+                    "bold");
 
     private static final Pattern METRIC_ID = Pattern.compile("[a-z][a-z0-9_]*");
     private static final Pattern WHOLE = Pattern.compile("[-+]?\\d+");
@@ -109,7 +110,7 @@ final class ClaimsTreeMapper {
         for (int i = 0; i < list.items().size(); i++) {
             claims.add(claim(list.items().get(i), claimsAt.appendIndex(i), id, i, tableScale, tableMargin));
         }
-        return new ClaimTable(id, caption, testSize, runs, claims);
+        return new ClaimTable(id, caption, testSize, runs, claims, classCounts(t, at, what), compare(t, at, what));
     }
 
     private Claim claim(TreeNode node, JsonPointer at, String tableId, int index, Scale tableScale,
@@ -165,8 +166,61 @@ final class ClaimsTreeMapper {
         Double margin = marginPrinted == null ? null
                 : marginPrinted.divide(BigDecimal.valueOf(scale.factor())).doubleValue();
 
+        Integer ownSize = optionalWhole(c, at, "test_size", what, 1,
+                "write the number of items this value was computed on, or leave it out to use the table's");
+        boolean bold = optionalBoolean(c, at, "bold");
         return new Claim(tableId, row, column, metric, params, value, scale,
-                pmNumber == null ? null : pmNumber.doubleValue(), pmKind, page, margin, location(c, at));
+                pmNumber == null ? null : pmNumber.doubleValue(), pmKind, page, margin, location(c, at), ownSize, bold);
+    }
+
+    private boolean optionalBoolean(TreeNode.Mapping m, JsonPointer at, String field) {
+        TreeNode.Entry e = m.entry(field);
+        if (e == null || isNull(e.value())) return false;
+        String s = scalarText(e.value(), at.appendProperty(field), field);
+        if (s.equals("true")) return true;
+        if (s.equals("false")) return false;
+        throw fail(e.value(), at.appendProperty(field), field + " is " + quote(s) + ", not true or false",
+                "write " + field + ": true or " + field + ": false");
+    }
+
+    private Map<String, Long> classCounts(TreeNode.Mapping t, JsonPointer at, String what) {
+        TreeNode.Entry e = t.entry("class_counts");
+        if (e == null || isNull(e.value())) return Map.of();
+        JsonPointer countsAt = at.appendProperty("class_counts");
+        if (!(e.value() instanceof TreeNode.Mapping m)) {
+            throw fail(e.value(), countsAt, "class_counts of " + what + " is not a mapping",
+                    "write class_counts as label: count pairs, for example {positive: 120, negative: 880}");
+        }
+        Map<String, Long> counts = new LinkedHashMap<>();
+        for (TreeNode.Entry p : m.entries()) {
+            JsonPointer pAt = countsAt.appendProperty(p.key());
+            String s = scalarText(p.value(), pAt, "a class count");
+            if (s == null || !WHOLE.matcher(s.strip()).matches() || s.strip().startsWith("-")) {
+                throw fail(p.value(), pAt, "the count of class " + quote(p.key()) + " is " + quote(String.valueOf(s))
+                        + ", not a whole number", "write the number of test items of that class, for example 120");
+            }
+            counts.put(p.key(), Long.parseLong(s.strip().replace("+", "")));
+        }
+        return counts;
+    }
+
+    private List<List<String>> compare(TreeNode.Mapping t, JsonPointer at, String what) {
+        TreeNode.Entry e = t.entry("compare");
+        if (e == null || isNull(e.value())) return List.of();
+        JsonPointer cmpAt = at.appendProperty("compare");
+        TreeNode.Sequence seq = sequence(e.value(), cmpAt, "compare of " + what);
+        List<List<String>> pairs = new ArrayList<>();
+        for (int i = 0; i < seq.items().size(); i++) {
+            TreeNode item = seq.items().get(i);
+            JsonPointer itemAt = cmpAt.appendIndex(i);
+            if (!(item instanceof TreeNode.Sequence pair) || pair.items().size() != 2) {
+                throw fail(item, itemAt, "each entry of compare must be a pair of row labels",
+                        "write for example compare: [[\"Ours\", \"Baseline\"]]");
+            }
+            pairs.add(List.of(text(pair.items().get(0), itemAt.appendIndex(0), "a row label"),
+                    text(pair.items().get(1), itemAt.appendIndex(1), "a row label")));
+        }
+        return pairs;
     }
 
     private List<String> column(TreeNode.Mapping c, JsonPointer at) {

@@ -9,6 +9,7 @@ import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import com.fasterxml.jackson.dataformat.yaml.YAMLGenerator;
 import com.fasterxml.jackson.dataformat.yaml.YAMLMapper;
 import java.math.BigDecimal;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -57,6 +58,18 @@ public final class ClaimsWriter {
             if (t.testSize() == null) table.putNull("test_size");
             else table.put("test_size", t.testSize().intValue());
             table.put("runs", t.runs());
+            if (!t.classCounts().isEmpty()) {
+                ObjectNode counts = table.putObject("class_counts");
+                t.classCounts().entrySet().stream().sorted(Map.Entry.comparingByKey())
+                        .forEach(e -> counts.put(e.getKey(), e.getValue().longValue()));
+            }
+            if (!t.compare().isEmpty()) {
+                ArrayNode cmp = table.putArray("compare");
+                for (List<String> pair : t.compare()) {
+                    ArrayNode p = cmp.addArray();
+                    pair.forEach(p::add);
+                }
+            }
             ArrayNode claims = table.putArray("claims");
             for (Claim c : t.claims()) claims.add(claim(c));
         }
@@ -84,6 +97,8 @@ public final class ClaimsWriter {
             if (c.pmKind() != null) n.put("pm_kind", c.pmKind().id());
         }
         if (c.page() != null) n.put("page", c.page().intValue());
+        if (c.testSize() != null) n.put("test_size", c.testSize().intValue());
+        if (c.bold()) n.put("bold", true);
         if (c.margin() != null) {
             // Claim.margin is on the fraction scale; the file states it on the value's printed scale.
             BigDecimal printed = BigDecimal.valueOf(c.margin()).multiply(BigDecimal.valueOf(c.scale().factor()));

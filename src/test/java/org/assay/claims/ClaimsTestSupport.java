@@ -43,8 +43,8 @@ final class ClaimsTestSupport {
         return new ClaimsFile(null, f.title(), f.document(), f.tables().stream()
                 .map(t -> new ClaimTable(t.id(), t.caption(), t.testSize(), t.runs(), t.claims().stream()
                         .map(c -> new Claim(c.tableId(), c.row(), c.column(), c.metric(), c.params(), c.value(),
-                                c.scale(), c.pm(), c.pmKind(), c.page(), c.margin(), null))
-                        .toList()))
+                                c.scale(), c.pm(), c.pmKind(), c.page(), c.margin(), null, c.testSize(), c.bold()))
+                        .toList(), t.classCounts(), t.compare()))
                 .toList());
     }
 }

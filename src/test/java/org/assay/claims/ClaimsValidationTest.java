@@ -250,7 +250,7 @@ class ClaimsValidationTest {
                       - {metric: accuracy, value: "50.0", scale: percent}
                 """));
         assertNames(e, "claims.yaml", "line 3", "unknown field \"tset_size\"", "test_size");
-        assertThat(e.fix()).contains("id, caption, test_size, runs, scale, margin, claims");
+        assertThat(e.fix()).contains("id, caption, test_size, runs, scale, margin, class_counts, compare, claims");
     }
 
     @Test
