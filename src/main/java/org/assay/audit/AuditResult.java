@@ -14,7 +14,8 @@ public record AuditResult(
         List<InputFile> inputs,
         EstimationSettings settings,
         double margin,
-        List<String> warnings) {
+        List<String> warnings,
+        org.assay.audit.checks.CheckResult checks) {
 
     public long count(Verdict v) { return findings.stream().filter(f -> f.verdict() == v).count(); }
 }

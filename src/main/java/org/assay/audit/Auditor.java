@@ -81,7 +81,8 @@ public final class Auditor {
                         + c.tableId()));
             }
         }
-        return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings);
+        var checks = new org.assay.audit.checks.ClaimChecker().check(claims);
+        return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings, checks);
     }
 
     /** Holm's step-down adjustment over every computable claim of the audit (Holm 1979). */

@@ -58,6 +58,7 @@ public final class JsonReport {
             o.put("reason", u.reason());
             unaudited.add(o);
         }
+        root.set("checks", CheckReport.findings(r.checks()));
         ArrayNode warnings = root.putArray("warnings");
         r.warnings().forEach(warnings::add);
         try {

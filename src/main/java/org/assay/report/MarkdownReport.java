@@ -26,6 +26,7 @@ public final class MarkdownReport {
         v.put("tables", tables(r));
         v.put("unaudited", unaudited(r));
         v.put("warnings", warnings(r));
+        v.put("checks", CheckReport.section(r.checks()));
         return Templates.fill(Templates.load("report.md"), v);
     }
 
