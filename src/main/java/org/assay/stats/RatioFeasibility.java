@@ -145,7 +145,8 @@ public final class RatioFeasibility {
         if (dp.run()) return search.result(true, null);
         if (gridDecides) return approximateNearest(search.result(true, null));
         return search.result(search.foundAll(), "search stopped after " + STATE_CAP
-                + " partial sums per class; a rule without a witness is not shown to be impossible");
+                + " partial sums per class; a rule without a witness is not shown to be impossible, and the nearest"
+                + " values are the nearest found");
     }
 
     /**
