@@ -14,6 +14,11 @@ outputs from it.
   nobs1=n1, alpha=alpha, ratio=n2/n1, alternative="two-sided") (Cohen's h).
 - Minimal detectable difference: the p2 > p whose power above equals the target, found with
   scipy.optimize.brentq on that statsmodels power function over h, then p2 from h.
+- Paired gap range: for printed accuracies p1, p2 on the same n items, the counts
+  k = floor(p*n + 0.5), the two ends of the disagreement range worked out here from the 2x2 table
+  (fewest discordant items: |k1 - k2|; most: min(k1 + k2, 2n - k1 - k2)), statsmodels mcnemar
+  exact p-values at both ends, Connor's (1987) power formula evaluated with scipy.stats.norm, and
+  the unpaired proportions_ztest / NormalIndPower values on k1/n, k2/n.
 - AUC under the null: the exact variance of the Mann-Whitney AUC (no ties) over all
   C(m + n, m) equally likely rankings, by enumeration; compared in Java with Hanley-McNeil at
   A = 0.5.
@@ -26,6 +31,7 @@ import sys
 
 import numpy as np
 import scipy
+import scipy.stats as st
 import statsmodels
 from scipy.optimize import brentq
 from statsmodels.stats.contingency_tables import mcnemar
@@ -104,6 +110,44 @@ mdd_cases.append({"p": 0.995, "n": 20, "alpha": 0.05, "power": 0.9, "difference"
 h_max = math.pi - 2 * math.asin(math.sqrt(0.995))
 assert NormalIndPower().power(effect_size=h_max, nobs1=20, alpha=0.05, ratio=1.0) < 0.9
 
+# Paired gap range: the 2x2 table of two systems on n items with k1 and k2 correct.
+def connor_power(delta, psi, n, alpha):
+    z = st.norm.isf(alpha / 2)
+    spread = math.sqrt(psi - delta ** 2)
+    if spread == 0:
+        return 1.0 if math.sqrt(n) * abs(delta) > z * math.sqrt(psi) else 0.0
+    return float(st.norm.cdf((math.sqrt(n) * abs(delta) - z * math.sqrt(psi)) / spread)
+                 + st.norm.cdf((-math.sqrt(n) * abs(delta) - z * math.sqrt(psi)) / spread))
+
+
+def table_end(k1, k2, n, both_right, alpha):
+    # both_right items correct for both systems fixes the whole table.
+    b = k1 - both_right            # first right, second wrong
+    c = k2 - both_right            # second right, first wrong
+    both_wrong = n - both_right - b - c
+    assert min(b, c, both_right, both_wrong) >= 0
+    return {"b": b, "c": c, "disagreement": (b + c) / n,
+            "exact_p_value": float(mcnemar([[both_right, b], [c, both_wrong]], exact=True).pvalue),
+            "power": connor_power((b - c) / n, (b + c) / n, n, alpha)}
+
+
+paired_cases = []
+for p1, p2, n, alpha in [(0.912, 0.908, 2000, 0.05), (0.94, 0.90, 100, 0.05), (0.5, 0.5, 1000, 0.05),
+                         (0.3, 0.1, 250, 0.01), (0.999, 0.95, 1000, 0.05), (0.8764, 0.8712, 3700, 0.05),
+                         (0.25, 0.31, 400, 0.05), (1.0, 0.0, 10, 0.05)]:
+    k1 = math.floor(p1 * n + 0.5)
+    k2 = math.floor(p2 * n + 0.5)
+    # Fewest disagreements: as many items right for both as possible, min(k1, k2).
+    most = table_end(k1, k2, n, min(k1, k2), alpha)
+    # Most disagreements: as few items right for both as possible, max(0, k1 + k2 - n).
+    least = table_end(k1, k2, n, max(0, k1 + k2 - n), alpha)
+    z, p = proportions_ztest([k1, k2], [n, n])
+    pw = NormalIndPower().power(effect_size=proportion_effectsize(k1 / n, k2 / n), nobs1=n,
+                                alpha=alpha, ratio=1.0, alternative="two-sided")
+    paired_cases.append({"p1": p1, "p2": p2, "n": n, "alpha": alpha, "correct1": k1, "correct2": k2,
+                         "most_favourable": most, "least_favourable": least,
+                         "unpaired_p_value": finite_or_none(p), "unpaired_power": float(pw)})
+
 # Exact null variance of the AUC (Mann-Whitney U / (m n), continuous scores, no ties).
 null_auc = []
 for m, n in [(3, 4), (5, 5), (4, 7), (2, 9), (6, 6)]:
@@ -125,6 +169,7 @@ out = {
     "proportions_ztest": ztest_cases,
     "normal_ind_power": power_cases,
     "minimal_detectable_difference": mdd_cases,
+    "paired_gap_range": paired_cases,
     "null_auc_variance": null_auc,
 }
 target = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "resources", "reference",
