@@ -85,8 +85,9 @@ class PairedGapRangeTest {
                 assertThat(end.b() - end.c()).isEqualTo(r.correct1() - r.correct2());
                 long bothRight = r.correct1() - end.b();
                 long bothWrong = n - bothRight - end.b() - end.c();
-                assertThat(new long[] {end.b(), end.c(), bothRight, bothWrong}).as(java.util.Arrays.toString(c))
-                        .allSatisfy(x -> assertThat(x).isNotNegative());
+                for (long cell : new long[] {end.b(), end.c(), bothRight, bothWrong}) {
+                    assertThat(cell).as(java.util.Arrays.toString(c)).isNotNegative();
+                }
             }
             assertThat(r.mostFavourable().disagreement()).isLessThanOrEqualTo(r.leastFavourable().disagreement());
         }
