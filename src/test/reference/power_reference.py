@@ -28,6 +28,7 @@ import json
 import math
 import os
 import sys
+import warnings
 
 import numpy as np
 import scipy
@@ -37,6 +38,10 @@ from scipy.optimize import brentq
 from statsmodels.stats.contingency_tables import mcnemar
 from statsmodels.stats.power import NormalIndPower
 from statsmodels.stats.proportion import proportion_effectsize, proportions_ztest
+
+# statsmodels divides by zero on purpose-built edge cases (no discordant pair, both proportions 0);
+# the NaN / inf it returns is recorded, so its warnings are noise here.
+warnings.filterwarnings("ignore", category=RuntimeWarning)
 
 print("python", sys.version.split()[0], "numpy", np.__version__, "scipy", scipy.__version__,
       "statsmodels", statsmodels.__version__)

@@ -1,7 +1,6 @@
 package org.assay.stats;
 
 import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.special.Erf;
 
 /** The standard normal pieces the power formulas share. */
 final class PowerNormal {
@@ -10,9 +9,9 @@ final class PowerNormal {
 
     private PowerNormal() {}
 
-    /** &Phi;(x) through erfc, so a far tail keeps its relative accuracy (Commons Math {@link Erf}). */
+    /** &Phi;(x); Commons Math computes it through erfc, so a far lower tail keeps its relative accuracy. */
     static double cdf(double x) {
-        return 0.5 * Erf.erfc(-x / Math.sqrt(2));
+        return STANDARD.cumulativeProbability(x);
     }
 
     /** The two-sided critical value z with P(|Z| &gt; z) = alpha. */
@@ -20,9 +19,9 @@ final class PowerNormal {
         return STANDARD.inverseCumulativeProbability(1 - alpha / 2);
     }
 
-    /** P(|Z| &gt; |z|), computed as erfc(|z|/&radic;2) rather than 1 minus a number near 1. */
+    /** P(|Z| &gt; |z|) = 2&middot;&Phi;(&minus;|z|), from the lower tail rather than 1 minus a number near 1. */
     static double twoSidedPValue(double z) {
-        return Erf.erfc(Math.abs(z) / Math.sqrt(2));
+        return 2 * STANDARD.cumulativeProbability(-Math.abs(z));
     }
 
     /**
