@@ -3,6 +3,8 @@ package org.assay.audit.checks;
 import java.math.BigDecimal;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import org.assay.claims.ClaimTable;
 import org.assay.claims.Claim;
 import org.assay.stats.Printed;
 
@@ -44,4 +46,17 @@ final class Claims {
 
     /** The positive class named by the claim's params, or null. */
     static String positive(Claim c) { return c.params().get("positive"); }
+
+    /** Positive and negative counts: two class counts, or the named positive class against all others. */
+    static long[] positivesAndNegatives(ClaimTable table, Claim c) {
+        Map<String, Long> counts = table.classCounts();
+        String positive = Claims.positive(c);
+        long total = counts.values().stream().mapToLong(Long::longValue).sum();
+        if (positive != null && counts.containsKey(positive)) {
+            return new long[] {counts.get(positive), total - counts.get(positive)};
+        }
+        if (counts.size() == 2) return counts.values().stream().mapToLong(Long::longValue).toArray();
+        return null;
+    }
+
 }

@@ -17,7 +17,7 @@ final class NotChecked {
 
     static CheckFinding missingClassCounts(String rule, ClaimTable table, Claim c, String needed) {
         return CheckFinding.of(rule, CheckKind.NOT_CHECKED, table.id(), List.of(c),
-                "not checked: " + needed + " unknown for " + Claims.quote(c) + ".",
+                "not checked: " + needed.replaceFirst("^the ", "") + " unknown for " + Claims.quote(c) + ".",
                 "add class_counts: {label: count, ...} to table " + table.id() + " in the claims file", Map.of());
     }
 }

@@ -53,7 +53,7 @@ final class RatioFeasibilityRule implements CheckRule {
                     default -> RatioFeasibility.f1(p, n, positives);
                 };
             } else if (auc) {
-                long[] k = positivesAndNegatives(table, c);
+                long[] k = Claims.positivesAndNegatives(table, c);
                 if (k == null) {
                     out.add(NotChecked.missingClassCounts(NAME, table, c, "the positive and negative counts"));
                     continue;
@@ -90,18 +90,6 @@ final class RatioFeasibilityRule implements CheckRule {
                     "check the value and the counts it was computed on", d));
         }
         return out;
-    }
-
-    /** Positive and negative counts: two class counts, or the named positive class against all others. */
-    private static long[] positivesAndNegatives(ClaimTable table, Claim c) {
-        Map<String, Long> counts = table.classCounts();
-        String positive = Claims.positive(c);
-        long total = counts.values().stream().mapToLong(Long::longValue).sum();
-        if (positive != null && counts.containsKey(positive)) {
-            return new long[] {counts.get(positive), total - counts.get(positive)};
-        }
-        if (counts.size() == 2) return counts.values().stream().mapToLong(Long::longValue).toArray();
-        return null;
     }
 
     /** The positive class's count: named by the claim's params, else the only class count there is to use. */

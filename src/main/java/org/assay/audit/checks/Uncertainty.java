@@ -36,8 +36,8 @@ record Uncertainty(double halfWidth, String basis) {
             Interval w = ProportionMethod.WILSON.interval().compute(k, n, 0.95);
             return new Uncertainty(w.halfWidth(), "the 95% Wilson interval for " + k + " of " + n + " items");
         }
-        if (c.metric().equals("roc_auc") && table.classCounts().size() == 2) {
-            long[] counts = table.classCounts().values().stream().mapToLong(Long::longValue).toArray();
+        long[] counts = c.metric().equals("roc_auc") ? Claims.positivesAndNegatives(table, c) : null;
+        if (counts != null) {
             double auc = Math.max(0, Math.min(1, c.value().fraction(c.scale())));
             double se = HanleyMcNeil.standardError(auc, counts[0], counts[1]);
             return new Uncertainty(Z95 * se, "1.96 × the Hanley–McNeil standard error for " + counts[0] + " and "
