@@ -27,8 +27,9 @@ final class RatioFeasibilityRule implements CheckRule {
             String m = c.metric();
             boolean binary = m.equals("precision") || m.equals("recall") || m.equals("f1");
             boolean macroRecall = m.equals("balanced_accuracy") || m.equals("macro_recall");
+            boolean macroOther = m.equals("macro_precision") || m.equals("macro_f1");
             boolean auc = m.equals("roc_auc");
-            if (!binary && !macroRecall && !auc) continue;
+            if (!binary && !macroRecall && !macroOther && !auc) continue;
             if (table.runs() > 1) {
                 out.add(CheckFinding.of(NAME, CheckKind.NOTE, table.id(), List.of(c), "not checked: "
                         + Claims.quote(c) + " averages " + table.runs() + " runs; ratio feasibility is checked for single runs.",
@@ -60,6 +61,24 @@ final class RatioFeasibilityRule implements CheckRule {
                 }
                 basis = k[0] + " and " + k[1] + " items of the two classes";
                 f = RatioFeasibility.rocAuc(p, k[0], k[1]);
+            } else if (macroOther) {
+                if (table.classCounts().isEmpty()) {
+                    out.add(NotChecked.missingClassCounts(NAME, table, c, "the class counts"));
+                    continue;
+                }
+                // Relaxation: with every class predicted exactly n_c times, per-class precision and F1
+                // both equal t_c/n_c, so every macro recall value is also a macro precision / F1 value.
+                // A value macro recall can reach is therefore not flagged; one it cannot reach is not
+                // proof of anything (precision and F1 have many more values), so it is only noted.
+                long[] k = table.classCounts().values().stream().mapToLong(Long::longValue).toArray();
+                tally.ran(NAME);
+                Feasibility viaRecall = RatioFeasibility.macroRecall(p, k);
+                if (!viaRecall.roundedFeasible()) {
+                    out.add(CheckFinding.of(NAME, CheckKind.NOTE, table.id(), List.of(c), "not fully checked: "
+                            + Claims.quote(c) + " — " + m + " depends on the joint confusion matrix; only the values "
+                            + "reachable with every class predicted as often as it occurs were searched.", null, Map.of()));
+                }
+                continue;
             } else {
                 if (table.classCounts().isEmpty()) {
                     out.add(NotChecked.missingClassCounts(NAME, table, c, "the class counts"));

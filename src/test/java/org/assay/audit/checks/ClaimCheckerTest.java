@@ -69,6 +69,20 @@ class ClaimCheckerTest {
     }
 
     @Test
+    void macroPrecisionAndF1AreCheckedThroughTheMacroRecallValuesTheyContain() throws Exception {
+        // with every class predicted exactly as often as it occurs, per-class precision = recall = F1 = t/n_c
+        // (common practice arithmetic), so 0.75 = (1 + 1/2)/2 with classes of 2 and 2 items is reachable
+        String ok = "{row: A, column: [F1], metric: macro_f1, value: \"0.75\", scale: fraction}";
+        CheckResult r = check("test_size: 4\nclass_counts: {a: 2, b: 2}", ok);
+        assertThat(r.checksRun()).containsEntry("ratio-feasibility", 1);
+        assertThat(r.findings().stream().filter(f -> f.rule().equals("ratio-feasibility"))).isEmpty();
+        // 0.60 is not a macro recall value there (steps of 0.25); for F1 that proves nothing, so it is only a note
+        CheckResult note = check("test_size: 4\nclass_counts: {a: 2, b: 2}", ok.replace("0.75", "0.60"));
+        assertThat(of(note, "ratio-feasibility", CheckKind.NOTE)).hasSize(1);
+        assertThat(of(note, "ratio-feasibility", CheckKind.INFEASIBLE)).isEmpty();
+    }
+
+    @Test
     void f1MustBeTheHarmonicMeanOfPrecisionAndRecall() throws Exception {
         // F1 = 2PR/(P+R): P = 0.80, R = 0.60 give 0.686 (common practice: the definition of F1)
         String p = "{row: A, column: [P], metric: precision, value: \"0.80\", scale: fraction}";
