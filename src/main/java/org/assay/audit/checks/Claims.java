@@ -35,6 +35,16 @@ final class Claims {
         return String.format(Locale.ROOT, "%." + Math.max(0, decimals) + "f", fraction * c.scale().factor());
     }
 
+    /** Claims grouped by column: the same header path, metric and parameters, across rows. */
+    static Map<List<Object>, List<Claim>> byColumn(List<Claim> claims) {
+        Map<List<Object>, List<Claim>> columns = new java.util.LinkedHashMap<>();
+        for (Claim c : claims) {
+            columns.computeIfAbsent(List.of(c.column(), c.metric(), new java.util.TreeMap<>(c.params())),
+                    k -> new java.util.ArrayList<>()).add(c);
+        }
+        return columns;
+    }
+
     /** The parent header path (all but the last header): claims under one parent are summarised together. */
     static List<String> parent(Claim c) {
         return c.column().isEmpty() ? List.of() : c.column().subList(0, c.column().size() - 1);

@@ -230,14 +230,11 @@ final class ConsistencyRules {
         @Override
         public List<CheckFinding> check(ClaimTable table, Tally tally) {
             List<CheckFinding> out = new ArrayList<>();
-            Map<List<Object>, List<Claim>> columns = new LinkedHashMap<>();
-            for (Claim c : table.claims()) {
+            List<Claim> percentProportions = table.claims().stream().filter(c -> {
                 MetricFacts f = MetricFacts.of(c.metric());
-                if (f == null || f.highest() != 1 || c.scale().factor() != 100) continue;
-                columns.computeIfAbsent(List.of(c.column(), c.metric(), new java.util.TreeMap<>(c.params())),
-                        k -> new ArrayList<>()).add(c);
-            }
-            for (List<Claim> col : columns.values()) {
+                return f != null && f.highest() == 1 && c.scale().factor() == 100;
+            }).toList();
+            for (List<Claim> col : Claims.byColumn(percentProportions).values()) {
                 if (col.size() < 2) continue;
                 for (Claim c : col) {
                     tally.ran(NAME);

@@ -29,12 +29,7 @@ final class GapRule implements CheckRule {
     @Override
     public List<CheckFinding> check(ClaimTable table, Tally tally) {
         List<CheckFinding> out = new ArrayList<>();
-        Map<List<Object>, List<Claim>> columns = new LinkedHashMap<>();
-        for (Claim c : table.claims()) {
-            columns.computeIfAbsent(List.of(c.column(), c.metric(), new java.util.TreeMap<>(c.params())),
-                    k -> new ArrayList<>()).add(c);
-        }
-        for (List<Claim> col : columns.values()) {
+        for (List<Claim> col : Claims.byColumn(table.claims()).values()) {
             if (col.size() < 2) continue;
             MetricFacts facts = MetricFacts.of(col.get(0).metric());
             for (List<Claim> pair : pairs(table, col, facts)) {
