@@ -27,10 +27,10 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "resolve. Writes check.md, check.json and reviewer-comments.md.", ""},
         footer = {"", "Examples:",
             "  assay check claims.yaml",
-            "  assay check examples/birdcalls/claims.yaml --out check-report --fail-on infeasible",
+            "  assay check examples/birdcalls/claims.yaml --fail-on infeasible",
             "",
-            "Checks that need a test-set size or class counts are listed as 'not checked' until the claims file",
-            "gives them (test_size: and class_counts: on the table).",
+            "Checks that need a test-set size or class counts are listed as 'not checked'",
+            "until the claims file gives them (test_size: and class_counts: on the table).",
             "",
             "Exit codes: 0 done; 1 done and the --fail-on condition met; 2 bad usage or input; 3 internal error."})
 final class CheckCommand implements Callable<Integer> {
