@@ -73,7 +73,7 @@ public final class MarkdownReport {
             if (first != null) sb.append(" · reproduction: ").append(first.n()).append(" items");
             if (t.runs() > 1) sb.append(" · printed values average ").append(t.runs()).append(" runs");
             sb.append("\n\n");
-            sb.append("| Claim | Metric | Printed | Rounds from | Reproduced | ").append(conf)
+            sb.append("| Claim | Metric | Printed | Rounding interval | Reproduced | ").append(conf)
                     .append(" interval | Range if claim true | p | Holm p | Verdict |\n");
             sb.append("|---|---|---:|---|---:|---|---|---:|---:|---|\n");
             List<String> notes = new ArrayList<>();
