@@ -21,10 +21,14 @@ import org.assay.common.UserInputException;
 final class ClaimsTreeMapper {
     static final List<String> TOP_FIELDS = List.of("source", "tables");
     static final List<String> SOURCE_FIELDS = List.of("title", "document");
-    static final List<String> TABLE_FIELDS = List.of("id", "caption", "test_size", "runs", "scale", "margin", "class_counts", "compare", "claims");
+    static final List<String> TABLE_FIELDS = List.of("id", "caption", "test_size", "runs", "scale", "margin", "class_counts", "compare", "claims",
+            // provenance written by extract, kept for the reader of the file and not used by any check
+            "page", "box", "label_columns", "columns", "rows", "other_cells");
     static final List<String> CLAIM_FIELDS =
             List.of("row", "column", "metric", "params", "value", "scale", "pm", "pm_kind", "page", "margin", "test_size",
-                    "bold");
+                    "bold",
+                    // provenance written by extract, kept for the reader of the file and not used by any check
+                    "cell", "box", "underline", "markers", "confidence");
 
     private static final Pattern METRIC_ID = Pattern.compile("[a-z][a-z0-9_]*");
     private static final Pattern WHOLE = Pattern.compile("[-+]?\\d+");

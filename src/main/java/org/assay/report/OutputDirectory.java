@@ -31,7 +31,7 @@ public final class OutputDirectory {
         for (String name : files.keySet()) {
             Path target = dir.resolve(name);
             if (Files.exists(target) && !force) {
-                throw new UserInputException(target, null, "refusing to overwrite an existing report file",
+                throw new UserInputException(target, null, "refusing to overwrite an existing file",
                         "pass --force to replace it, or choose another --out");
             }
         }

@@ -1,0 +1,31 @@
+package org.assay.pdf;
+
+import java.io.IOException;
+
+/**
+ * Guards against hostile content streams: a page may run at most so many operators and so
+ * many milliseconds, so a looping or bloated stream ends with a clear error instead of a hang.
+ */
+final class PageBudget {
+    /** Thrown from inside PDFBox's stream processing; caught and reported by the document reader. */
+    static final class Exceeded extends IOException {
+        Exceeded(String what) { super(what); }
+    }
+
+    private final long maxOperators;
+    private final long deadlineNanos;
+    private long operators;
+
+    PageBudget(long maxOperators, long millis) {
+        this.maxOperators = maxOperators;
+        this.deadlineNanos = System.nanoTime() + millis * 1_000_000L;
+    }
+
+    /** Called once per content-stream operator. */
+    void tick() throws Exceeded {
+        operators++;
+        if (operators > maxOperators) throw new Exceeded("more than " + maxOperators + " drawing operators");
+        // The clock is read every 1024 operators: cheap, and still stops a loop within milliseconds.
+        if ((operators & 1023) == 0 && System.nanoTime() > deadlineNanos) throw new Exceeded("the page time budget");
+    }
+}

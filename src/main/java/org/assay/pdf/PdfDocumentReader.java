@@ -1,0 +1,129 @@
+package org.assay.pdf;
+
+import java.io.IOException;
+import java.io.RandomAccessFile;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.io.IOUtils;
+import org.apache.pdfbox.io.RandomAccessReadBufferedFile;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.encryption.InvalidPasswordException;
+import org.assay.common.UserInputException;
+
+/**
+ * Opens a PDF with the limits of {@link PdfLimits} and reads the selected pages' glyphs and rules.
+ * Every way a file can be unreadable ends in one {@link UserInputException} naming the file.
+ */
+public final class PdfDocumentReader {
+    private final PdfLimits limits;
+    private String lastTitle;
+
+    public PdfDocumentReader(PdfLimits limits) { this.limits = limits; }
+
+    public PdfDocumentReader() { this(PdfLimits.DEFAULT); }
+
+    /** The title in the document information of the last PDF read, or null. */
+    public String lastTitle() { return lastTitle; }
+
+    /** The document's pages as selected (null selects all), each with its glyphs and rules. */
+    public List<PageContent> read(Path file, String password, PageSelection pages) {
+        checkFile(file);
+        try (PDDocument doc = load(file, password)) {
+            String title = doc.getDocumentInformation() == null ? null : doc.getDocumentInformation().getTitle();
+            lastTitle = title == null || title.isBlank() ? null : title.strip();
+            int count = doc.getNumberOfPages();
+            if (count > limits.maxPages()) {
+                throw new UserInputException(file, null, "the PDF has " + count + " pages, more than the limit of "
+                        + limits.maxPages(), "extract the pages with the tables into a smaller PDF, or use --pages");
+            }
+            List<Integer> selected = pages == null ? PageSelection.all(count) : pages.resolve(count, file);
+            List<PageContent> out = new ArrayList<>();
+            GlyphCollector glyphs = new GlyphCollector();
+            for (int p : selected) out.add(readPage(file, doc, glyphs, p));
+            if (out.stream().allMatch(pc -> pc.glyphs().stream().allMatch(Glyph::isSpace))) {
+                throw new UserInputException(file, null, "the PDF has no text layer (a scan?)",
+                        "type the claims in, or run OCR first");
+            }
+            return out;
+        } catch (InvalidPasswordException e) {
+            throw new UserInputException(file, null, password == null ? "the PDF is encrypted" : "the password is wrong",
+                    password == null ? "give its password with --password" : "check the password given with --password");
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof UserInputException u) throw u;
+            throw new UserInputException(file, null, "the PDF is damaged and cannot be read ("
+                    + shortReason(e) + ")", "download it again or re-save it from a PDF viewer", e);
+        }
+    }
+
+    private PageContent readPage(Path file, PDDocument doc, GlyphCollector glyphs, int p) throws IOException {
+        PDPage page = doc.getPage(p - 1);
+        PDRectangle box = page.getCropBox();
+        try {
+            PageBudget budget = new PageBudget(limits.maxOperatorsPage(), limits.millisPerPage());
+            List<Glyph> g = glyphs.collect(doc, p, budget);
+            List<Rule> r = new RuleCollector(page, budget).collect();
+            return new PageContent(p, box.getWidth(), box.getHeight(), g, r);
+        } catch (PageBudget.Exceeded e) {
+            throw new UserInputException(file, "page " + p, "reading the page exceeded " + e.getMessage()
+                    + " (a looping or bloated content stream)", "use --pages to skip this page");
+        } catch (StackOverflowError e) {
+            throw new UserInputException(file, "page " + p, "the page's content is nested too deeply to read",
+                    "use --pages to skip this page");
+        }
+    }
+
+    private PDDocument load(Path file, String password) throws IOException {
+        long size = Files.size(file);
+        // Large files keep PDFBox's stream buffers on disk so memory stays bounded.
+        var cache = size > limits.inMemoryBytes() ? IOUtils.createTempFileOnlyStreamCache()
+                : IOUtils.createMemoryOnlyStreamCache();
+        return Loader.loadPDF(new RandomAccessReadBufferedFile(file.toFile()), password == null ? "" : password,
+                null, null, cache);
+    }
+
+    /** Cheap checks before PDFBox sees the file: exists, size, header, and a trailer at the end. */
+    private void checkFile(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new UserInputException(file, null, "no such file", "check the path");
+        }
+        long size;
+        byte[] head = new byte[1024];
+        byte[] tail = new byte[2048];
+        int headRead;
+        int tailRead;
+        try (RandomAccessFile f = new RandomAccessFile(file.toFile(), "r")) {
+            size = f.length();
+            headRead = Math.max(0, f.read(head));
+            f.seek(Math.max(0, size - tail.length));
+            tailRead = Math.max(0, f.read(tail));
+        } catch (IOException e) {
+            throw new UserInputException(file, null, "cannot read the file (" + e.getMessage() + ")", "check its permissions");
+        }
+        if (size == 0) throw new UserInputException(file, null, "the file is empty", "give a PDF file");
+        if (size > limits.maxBytes()) {
+            throw new UserInputException(file, null, "the file is " + (size >> 20) + " MiB, more than the limit of "
+                    + (limits.maxBytes() >> 20) + " MiB", "extract the pages with the tables into a smaller PDF");
+        }
+        if (!new String(head, 0, headRead, StandardCharsets.ISO_8859_1).contains("%PDF-")) {
+            throw new UserInputException(file, null, "this is not a PDF (no %PDF- header)", "give the paper's PDF file");
+        }
+        if (!new String(tail, 0, tailRead, StandardCharsets.ISO_8859_1).contains("%%EOF")) {
+            throw new UserInputException(file, null, "the PDF is truncated or damaged (it does not end with %%EOF)",
+                    "download it again");
+        }
+    }
+
+    private static String shortReason(Throwable e) {
+        String m = e.getMessage();
+        if (m == null || m.isBlank()) m = e.getClass().getSimpleName();
+        m = m.replaceAll("\\s+", " ");
+        return m.length() > 120 ? m.substring(0, 117) + "..." : m;
+    }
+
+}
