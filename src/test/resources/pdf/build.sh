@@ -65,8 +65,9 @@ build_into() { # build_into OUTDIR
     rm -f "$scratch"/scan-*.png
 
     # AES-256 (R6) with a user password, and with an empty user password.
-    qpdf --encrypt reader-pass owner-pass 256 -- "$out/$good.pdf" "$out/bad/encrypted.pdf"
-    qpdf --encrypt "" owner-pass 256 --modify=none -- "$out/$good.pdf" "$out/bad/owner-only.pdf"
+    # --static-id only fixes the trailer /ID (R6 keys do not depend on it).
+    qpdf --static-id --encrypt reader-pass owner-pass 256 -- "$out/$good.pdf" "$out/bad/encrypted.pdf"
+    qpdf --static-id --encrypt "" owner-pass 256 --modify=none -- "$out/$good.pdf" "$out/bad/owner-only.pdf"
 
     # Cut off at 60 percent: no xref table, no trailer, unfinished streams.
     local size
