@@ -74,7 +74,7 @@ public final class ClaimsDraftWriter {
                 ScaleGuess s = t.scales().get(c);
                 col.put("metric", m.metric());
                 col.put("metric_confidence", round(m.confidence()));
-                col.put("scale", s.scale().id());
+                col.put("scale", s.scale() == null ? "unknown" : s.scale().id());
                 col.put("scale_confidence", round(s.confidence()));
                 col.put("why", m.reason() + "; " + s.reason());
             }
@@ -107,7 +107,7 @@ public final class ClaimsDraftWriter {
         }
         ParsedCell p = cell.parsed();
         n.put("value", p.plainValue());
-        n.put("scale", cell.parsed().percent() ? "percent" : s.scale().id());
+        n.put("scale", scaleOf(cell, s));
         if (p.pm() != null) {
             n.put("pm", p.plainPm());
             n.put("pm_kind", "unknown");
@@ -135,6 +135,12 @@ public final class ClaimsDraftWriter {
         n.put("page", cell.page());
         n.set("box", box(cell.x0(), cell.top(), cell.x1(), cell.bottom()));
         return n;
+    }
+
+    /** A printed % sign settles the scale; a column with nothing to go on defaults to percent (the usual print). */
+    private static String scaleOf(ExtractedCell cell, ScaleGuess s) {
+        if (cell.parsed().percent() || s.scale() == null) return "percent";
+        return s.scale().id();
     }
 
     static String tableId(ExtractedTable t, List<String> taken) {
@@ -176,7 +182,7 @@ public final class ClaimsDraftWriter {
                         .forEach(e -> params.append(params.length() == 0 ? "" : ";").append(e.getKey()).append('=').append(e.getValue()));
                 r.put("params", params.toString());
                 r.put("value", cell.parsed().plainValue());
-                r.put("scale", cell.parsed().percent() ? "percent" : t.scales().get(c).scale().id());
+                r.put("scale", scaleOf(cell, t.scales().get(c)));
                 r.put("test_size", "");
                 r.put("runs", "1");
                 r.put("pm", cell.parsed().pm() == null ? "" : cell.parsed().plainPm());

@@ -320,7 +320,7 @@ public final class MetricGuesser {
             return MetricGuess.unknown("the headers name no metric and the caption names several: " + names);
         }
         Hit h = found.values().iterator().next();
-        return refine(h, CAPTION_ONLY, "the caption \"" + caption.strip() + "\"", String.join(" ", keys), captionKey);
+        return refine(h, CAPTION_ONLY, "the caption (not the header)", String.join(" ", keys), captionKey);
     }
 
     private static String others(List<String> keys, int except) {

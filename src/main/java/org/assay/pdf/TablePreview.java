@@ -25,11 +25,12 @@ public final class TablePreview {
     }
 
     static void render(ExtractedTable t, StringBuilder out) {
+        String caption = t.caption().replaceFirst("^(Table|TABLE|Tab\\.|Tbl\\.)\\s*\\S+?[:.|]?\\s+", "");
         out.append("Table ").append(t.number()).append(" (page ").append(t.page()).append("): ")
-                .append(shorten(t.caption(), 100)).append('\n');
+                .append(shorten(caption, 100)).append('\n');
         List<List<String>> grid = new ArrayList<>();
         List<String> head = new ArrayList<>();
-        head.add(t.labelHeaders().isEmpty() ? "" : String.join(" / ", t.labelHeaders()));
+        head.add(String.join(" / ", t.labelHeaders().stream().filter(h -> !h.isBlank()).toList()));
         for (List<String> c : t.columns()) head.add(String.join(" / ", c));
         grid.add(head);
         for (List<String> row : t.rows()) {
@@ -60,22 +61,28 @@ public final class TablePreview {
             MetricGuess m = t.metrics().get(c);
             out.append(c == 0 ? " " : "; ").append(String.join(" / ", t.columns().get(c))).append(" = ").append(m.metric());
             if (!m.params().isEmpty()) out.append(m.params());
-            out.append(' ').append(t.scales().get(c).scale().id());
+            ScaleGuess s = t.scales().get(c);
+            out.append(' ').append(s.scale() == null ? "scale?" : s.scale().id());
         }
         out.append('\n');
-        List<String> low = new ArrayList<>();
+        // Columns with the same doubtful guess are listed once, so a ten-column table stays readable.
+        java.util.Map<String, List<String>> doubtful = new java.util.LinkedHashMap<>();
         for (int c = 0; c < t.columns().size(); c++) {
+            String name = String.join(" / ", t.columns().get(c));
             MetricGuess m = t.metrics().get(c);
             if (m.confidence() < LOW_CONFIDENCE) {
-                low.add("column " + String.join(" / ", t.columns().get(c)) + ": metric " + m.metric() + " ("
-                        + percent(m.confidence()) + ", " + m.reason() + ")");
+                doubtful.computeIfAbsent("metric " + m.metric() + " (" + percent(m.confidence()) + ", " + m.reason() + ")",
+                        k -> new ArrayList<>()).add(name);
             }
             ScaleGuess s = t.scales().get(c);
             if (s.confidence() < LOW_CONFIDENCE) {
-                low.add("column " + String.join(" / ", t.columns().get(c)) + ": scale " + s.scale().id() + " ("
-                        + percent(s.confidence()) + ", " + s.reason() + ")");
+                doubtful.computeIfAbsent("scale " + (s.scale() == null ? "unknown" : s.scale().id()) + " ("
+                        + percent(s.confidence()) + ", " + s.reason() + ")", k -> new ArrayList<>()).add(name);
             }
         }
+        List<String> low = new ArrayList<>();
+        doubtful.forEach((what, cols) -> low.add((cols.size() == 1 ? "column " : "columns ") + String.join(", ", cols)
+                + ": " + what));
         for (ExtractedCell cell : t.cells()) {
             if (cell.confidence() < LOW_CONFIDENCE) {
                 low.add(String.join(" / ", cell.rowPath()) + " | " + String.join(" / ", cell.columnPath()) + ": \""

@@ -26,7 +26,7 @@ class ExtractCommandTest {
         CliRun extract = CliRun.of("extract", CORPUS.resolve("retrieval-twolevel.pdf").toString(), "--out", claims.toString());
         assertThat(extract.exitCode()).as(extract.err()).isZero();
         // the preview shows the grid with the header path and the bold best value
-        assertThat(extract.out()).contains("Image→Text / R@1").contains("**60.8**").contains("Wrote 1 table(s)");
+        assertThat(extract.out()).contains("Image→Text / R@1").contains("**60.8**").contains("Wrote 2 table(s)");
         String draft = Files.readString(claims);
         assertThat(draft).contains("test_size: null").contains("metric: \"recall_at_k\"");
 
@@ -40,7 +40,7 @@ class ExtractCommandTest {
         JsonNode json = new ObjectMapper().readTree(tmp.resolve("c1/check.json").toFile());
         assertThat(json.get("schema_version").asInt()).isEqualTo(1);
         ClaimsFile read = ClaimsReader.read(claims);
-        assertThat(read.allClaims()).hasSize(4 * 7);
+        assertThat(read.allClaims()).hasSize(4 * 7 + 4 * 4); // the two tables of the key, every value a claim
         Claim best = read.allClaims().stream().filter(c -> c.value().text().equals("60.8")).findFirst().orElseThrow();
         assertThat(best.bold()).isTrue();
         assertThat(best.metric()).isEqualTo("recall_at_k");
