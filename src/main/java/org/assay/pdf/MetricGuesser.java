@@ -137,6 +137,21 @@ public final class MetricGuesser {
         return ids;
     }
 
+    private static final Pattern SPEECH_ERROR = Pattern.compile("\\b(?:word|character|char) error rates?\\b|\\b(?:wer|cer)\\b");
+
+    /** A change against a baseline ("∆Acc", "Gain", "+/-"): not a value of the metric itself. */
+    private static final Pattern DIFFERENCE = Pattern.compile(
+            "^(?:[∆Δ]|delta\\b|gain\\b|improvement\\b|diff\\.?\\b|difference\\b|\\+/-)", Pattern.CASE_INSENSITIVE);
+    /**
+     * Quantities printed next to metrics in results tables that no check here covers: model cost,
+     * calibration and likelihood scores, error rates of speech and verification, counts (common practice).
+     */
+    private static final Pattern OTHER_QUANTITY = Pattern.compile("^(?:#|params?\\b|parameters\\b|flops\\b|gflops\\b|"
+            + "macs\\b|latency\\b|time\\b|train(?:ing)? time\\b|speed\\b|throughput\\b|fps\\b|memory\\b|size\\b|"
+            + "epochs?\\b|steps\\b|brier\\b|ece\\b|nll\\b|loss\\b|perplexity\\b|ppl\\b|wer\\b|cer\\b|eer\\b|"
+            + "energy\\b|cost\\b|rtf\\b|count\\b|removed\\b|width\\b|depth\\b|resolution\\b|year\\b|members\\b|templates\\b|"
+            + "sentences\\b|samples\\b|tokens\\b)", Pattern.CASE_INSENSITIVE);
+
     /** The metric of a column with this header path (top level first) in a table with this caption. */
     public static MetricGuess guess(List<String> headerPath, String caption) {
         List<String> levels = headerPath == null ? List.of() : headerPath;
@@ -152,6 +167,15 @@ public final class MetricGuesser {
             double level = below ? UPPER_LEVEL : 1.0;
             String where = "header \"" + levels.get(i).strip() + "\"" + (below ? " (above the bottom level)" : "");
             return refine(hit, level, where, others(keys, i), captionKey);
+        }
+        if (!levels.isEmpty()) {
+            String bottom = levels.get(levels.size() - 1).strip();
+            if (DIFFERENCE.matcher(bottom).find()) {
+                return MetricGuess.unknown("header \"" + bottom + "\" is a difference between values, not a metric value");
+            }
+            if (OTHER_QUANTITY.matcher(bottom).find()) { // the caption's metric must not be pinned on a cost column
+                return MetricGuess.unknown("header \"" + bottom + "\" names a quantity assay does not check");
+            }
         }
         for (int i = keys.size() - 1; i >= 0; i--) {
             MetricGuess near = similar(levels.get(i), keys.get(i));
@@ -295,6 +319,10 @@ public final class MetricGuesser {
 
     /** A metric named in the caption when the headers name none. */
     private static MetricGuess fromCaption(String caption, String captionKey, List<String> levels, List<String> keys) {
+        // Word and character error rates count edits per word, not wrong items: not the error_rate of a test set.
+        if (SPEECH_ERROR.matcher(captionKey).find()) {
+            return MetricGuess.unknown("the caption names a word or character error rate, which assay does not check");
+        }
         record Span(int start, int end, Hit hit) {}
         List<Span> spans = new ArrayList<>();
         for (Rule r : RULES) {

@@ -205,7 +205,11 @@ class MetricGuesserTest {
                 .apply("accuarcy", "accuracy"), within(1e-12));
     }
 
-    /** Headers that name no metric, or a metric with no id here. */
+    /**
+     * Headers that name no metric, or a metric with no id here. The caption's metric is not pinned on
+     * a cost, calibration or difference column, and word error rate (edits per word) is not the
+     * per-item error_rate (common practice).
+     */
     @ParameterizedTest
     @CsvSource(delimiter = ';', nullValues = "null", textBlock = """
             Prediction;null
@@ -218,6 +222,15 @@ class MetricGuesserTest {
             mAP@0.5;null
             P@10;null
             ;null
+            Brier;Calibration of the reader, accuracy as fractions
+            ECE;Accuracy and calibration error
+            ∆Acc;Test accuracy against the baseline
+            Gain;Test accuracy
+            Latency (ms);Test accuracy (%) of each variant
+            GFLOPs;Accuracy per budget
+            RTF;Word error rate (%) of the encoders
+            Clean;Word error rate (%) of the encoders
+            StudioRead;WER (%) on four invented sets
             """)
     void unknownHeaders(String header, String caption) {
         MetricGuess g = MetricGuesser.guess(header == null ? List.of() : List.of(header), caption);
