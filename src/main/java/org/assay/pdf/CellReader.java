@@ -37,7 +37,7 @@ final class CellReader {
         double confidence = parsed.confidence();
         if (boldDigits > 0 && !bold) confidence = Math.min(confidence, 0.6); // some digits bold, some not
         if (!superscripts.isEmpty() && parsed.kind() != ParsedCell.Kind.NUMBER) confidence = Math.min(confidence, 0.6);
-        return new ExtractedCell(rowPath, columnPath, parsed, bold, cell.underlined(), markers, page, cell.x0(),
+        return new ExtractedCell(rowPath, columnPath, CellText.normaliseLabel(cell.text()), parsed, bold, cell.underlined(), markers, page, cell.x0(),
                 cell.top(), cell.x1(), cell.bottom(), confidence);
     }
 }

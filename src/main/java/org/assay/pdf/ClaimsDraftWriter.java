@@ -114,7 +114,7 @@ public final class ClaimsDraftWriter {
         }
         if (cell.bold()) n.put("bold", true);
         n.put("page", cell.page());
-        n.put("cell", p.text());
+        n.put("cell", cell.printed());
         n.set("box", box(cell.x0(), cell.top(), cell.x1(), cell.bottom()));
         if (cell.underline()) n.put("underline", true);
         if (!cell.markers().isEmpty()) {
@@ -130,7 +130,7 @@ public final class ClaimsDraftWriter {
         n.put("row", String.join(" / ", cell.rowPath()));
         ArrayNode column = n.putArray("column");
         cell.columnPath().forEach(column::add);
-        n.put("cell", cell.parsed().text());
+        n.put("cell", cell.printed());
         n.put("kind", cell.parsed().kind().name().toLowerCase(java.util.Locale.ROOT));
         n.put("page", cell.page());
         n.set("box", box(cell.x0(), cell.top(), cell.x1(), cell.bottom()));

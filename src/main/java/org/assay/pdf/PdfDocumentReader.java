@@ -21,12 +21,26 @@ import org.assay.common.UserInputException;
  * Every way a file can be unreadable ends in one {@link UserInputException} naming the file.
  */
 public final class PdfDocumentReader {
+    /**
+     * PDFBox logs every glyph without a Unicode mapping (picture-mode line fonts, say) through
+     * java.util.logging; those are not the user's problem, and errors reach them as exceptions anyway.
+     * Held in fields so the logger settings are not garbage-collected.
+     */
+    private static final java.util.logging.Logger PDFBOX_LOG = quiet("org.apache.pdfbox");
+    private static final java.util.logging.Logger FONTBOX_LOG = quiet("org.apache.fontbox");
+
     private final PdfLimits limits;
     private String lastTitle;
 
     public PdfDocumentReader(PdfLimits limits) { this.limits = limits; }
 
     public PdfDocumentReader() { this(PdfLimits.DEFAULT); }
+
+    private static java.util.logging.Logger quiet(String name) {
+        java.util.logging.Logger log = java.util.logging.Logger.getLogger(name);
+        log.setLevel(java.util.logging.Level.OFF);
+        return log;
+    }
 
     /** The title in the document information of the last PDF read, or null. */
     public String lastTitle() { return lastTitle; }

@@ -72,6 +72,36 @@ class ExtractCommandTest {
     }
 
     @Test
+    void draftKeepsProvenanceAndListsCellsThatAreNotNumbers() throws Exception {
+        Path out = tmp.resolve("m.json");
+        CliRun run = CliRun.of("extract", CORPUS.resolve("markers-missing.pdf").toString(), "--table", "1",
+                "--out", out.toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode table = new ObjectMapper().readTree(out.toFile()).get("tables").get(0);
+        assertThat(table.get("test_size").isNull()).isTrue();
+        assertThat(table.get("page").asInt()).isEqualTo(1);
+        // the key (keys/markers-missing.yaml) has 20 cells: 16 values and 4 printed missing marks
+        assertThat(table.get("claims")).hasSize(16);
+        assertThat(table.get("other_cells")).hasSize(4);
+        assertThat(table.get("other_cells").findValuesAsText("kind")).containsOnly("missing");
+        JsonNode dagger = null, underlined = null;
+        for (JsonNode c : table.get("claims")) {
+            if (c.has("markers") && c.get("markers").get(0).asText().equals("†")) dagger = c;
+            if (c.path("underline").asBoolean(false) && underlined == null) underlined = c;
+            assertThat(c.get("box")).hasSize(4);
+            assertThat(c.get("confidence").asDouble()).isBetween(0.0, 1.0);
+        }
+        assertThat(dagger).isNotNull();
+        assertThat(dagger.get("value").asText()).isEqualTo("74.9");
+        assertThat(dagger.get("cell").asText()).isEqualTo("74.9%†");
+        assertThat(dagger.get("scale").asText()).isEqualTo("percent");
+        assertThat(underlined).isNotNull();
+        assertThat(table.get("columns").get(0).get("metric").asText()).isEqualTo("accuracy");
+        // the preview names what it is unsure of
+        assertThat(run.out()).contains("check these (low confidence)");
+    }
+
+    @Test
     void refusesToOverwriteWithoutForce() throws Exception {
         Path out = tmp.resolve("claims.yaml");
         Files.writeString(out, "mine");
