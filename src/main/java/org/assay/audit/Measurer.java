@@ -3,7 +3,7 @@ package org.assay.audit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.assay.data.ClassificationData;
+import org.assay.data.EvaluationData;
 import org.assay.metrics.MetricRegistry;
 import org.assay.metrics.PreparedMetric;
 
@@ -16,7 +16,7 @@ public final class Measurer {
     /** A metric id with its parameters, as given on the command line. */
     public record MetricRequest(String id, Map<String, String> params) {}
 
-    public List<Measurement> measure(ClassificationData data, List<MetricRequest> metrics, Long population) {
+    public List<Measurement> measure(EvaluationData data, List<MetricRequest> metrics, Long population) {
         if (population != null && data.size() > population) {
             throw org.assay.common.UserInputException.usage("--test-size " + population + " is smaller than the "
                     + data.size() + " examples in " + data.source(), "give the size of the full test set");

@@ -27,7 +27,7 @@ public record ClassificationData(
         double[] scores,
         double[] probabilities,
         int positive,
-        List<String> warnings) {
+        List<String> warnings) implements EvaluationData {
 
     public int size() { return truth.length; }
 
