@@ -20,7 +20,8 @@ public final class ClaimChecker {
             new ConsistencyRules.ScaleMixUp(),
             new PrecisionRules.PlusMinus(),
             new PrecisionRules.Digits(),
-            new GapRule());
+            new GapRule(),
+            new ConfigurationRule());
 
     public CheckResult check(ClaimsFile claims) {
         Tally tally = new Tally();

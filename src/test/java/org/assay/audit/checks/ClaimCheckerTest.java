@@ -186,4 +186,20 @@ class ClaimCheckerTest {
         CheckResult b = check("test_size: 1000", acc("A", "94.13"));
         assertThat(a.findings().get(0).id()).isEqualTo(b.findings().get(0).id()).startsWith("granularity-");
     }
+
+    @Test
+    void generationScoresMustStateTheirConfiguration() throws Exception {
+        // BLEU depends on the tokenizer and casing by more than a printed decimal (Post 2018, WMT,
+        // "A Call for Clarity in Reporting BLEU Scores"); ROUGE on stemming.
+        CheckResult bare = check("test_size: 2000",
+                "{row: A, column: [BLEU], metric: bleu, value: \"27.3\", scale: percent}",
+                "{row: A, column: [R-L], metric: rouge_l, value: \"41.0\", scale: percent}");
+        assertThat(of(bare, "configuration", CheckKind.QUESTIONABLE)).hasSize(2)
+                .anySatisfy(f -> assertThat(f.message()).contains("tokenize, lowercase").contains("fraction of a point"));
+        CheckResult stated = check("test_size: 2000",
+                "{row: A, column: [BLEU], metric: bleu, params: {tokenize: 13a, lowercase: false}, value: \"27.3\", scale: percent}",
+                "{row: A, column: [R-L], metric: rouge_l, params: {stem: true}, value: \"41.0\", scale: percent}");
+        assertThat(of(stated, "configuration", CheckKind.QUESTIONABLE)).isEmpty();
+        assertThat(stated.checksRun()).containsEntry("configuration", 2);
+    }
 }
