@@ -96,7 +96,7 @@ public final class AuditFileReader {
             }
             o = new ReadOptions(id, label, pred, score, prefix, text(r, "positive", null),
                     path(file, base, r, "manifest", at), path(file, base, r, "truth", at));
-            out.add(new Reproduction(text(r, "table", null), text(r, "row", null), predictions, o));
+            out.add(new ClassificationReproduction(text(r, "table", null), text(r, "row", null), predictions, o));
         }
         return new AuditFile(claims, out, margin);
     }

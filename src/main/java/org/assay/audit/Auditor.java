@@ -11,8 +11,7 @@ import org.assay.claims.ClaimTable;
 import org.assay.claims.ClaimsFile;
 import org.assay.claims.ClaimsReader;
 import org.assay.common.UserInputException;
-import org.assay.data.ClassificationData;
-import org.assay.data.ClassificationReader;
+import org.assay.data.EvaluationData;
 import org.assay.metrics.MetricRegistry;
 import org.assay.metrics.PreparedMetric;
 import org.assay.stats.Multiplicity;
@@ -37,14 +36,12 @@ public final class Auditor {
         for (Reproduction r : request.reproductions()) {
             ClaimTable table = selectTable(claims, r);
             String row = selectRow(claims, table, r);
-            ClassificationData data = ClassificationReader.read(r.predictions(), r.options());
-            inputs.add(InputFile.of("predictions for " + table.id(), r.predictions()));
-            if (r.options().manifest() != null) inputs.add(InputFile.of("manifest for " + table.id(), r.options().manifest()));
-            if (r.options().truth() != null) inputs.add(InputFile.of("truth for " + table.id(), r.options().truth()));
-            warnings.addAll(data.warnings());
-            Long population = table.testSize() == null ? null : table.testSize().longValue();
-            checkSizes(claims, table, data, population);
-            List<String> tableNotes = tableNotes(table, data, population, r);
+            Reproduction.Outputs outputs = r.read();
+            inputs.addAll(outputs.inputs());
+            for (Reproduction.Part part : outputs.parts()) {
+                warnings.addAll(part.data().warnings());
+                checkSizes(claims, table, part.data(), table.testSize() == null ? null : table.testSize().longValue());
+            }
 
             Map<String, Evidence> cache = new HashMap<>();
             for (Claim c : table.claims()) {
@@ -56,12 +53,23 @@ public final class Auditor {
                             "unknown metric '" + c.metric() + "'", "known metrics: "
                             + String.join(", ", MetricRegistry.all().stream().map(d -> d.id()).toList()));
                 }
+                Reproduction.Part part = outputs.partFor(c);
+                if (part == null) {
+                    findings.add(Finding.notComputable(c, ci[0], ci[1], "no outputs were given for column '"
+                            + String.join(" / ", c.column()) + "'"));
+                    continue;
+                }
+                EvaluationData data = part.data();
+                Integer size = c.testSizeIn(table);
+                Long population = size == null ? null : size.longValue();
+                List<String> tableNotes = tableNotes(table, data, population, part.manifestGiven());
                 Evidence evidence;
                 try {
-                    String key = c.metric() + c.params();
+                    String key = System.identityHashCode(part) + c.metric() + c.params() + population;
                     evidence = cache.get(key);
                     if (evidence == null) {
                         PreparedMetric m = MetricRegistry.get(c.metric()).prepare(data, c.params());
+                        if (m.notComputable() != null) throw UserInputException.usage(m.notComputable(), null);
                         evidence = estimator.evidence(m, population);
                         cache.put(key, evidence);
                     }
@@ -124,7 +132,7 @@ public final class Auditor {
         return r.row();
     }
 
-    private static void checkSizes(ClaimsFile claims, ClaimTable table, ClassificationData data, Long population) {
+    private static void checkSizes(ClaimsFile claims, ClaimTable table, EvaluationData data, Long population) {
         if (population != null && data.size() > population) {
             throw new UserInputException(claims.file(), null, "table " + table.id() + " has test_size " + population
                     + " but the predictions " + data.source() + " hold " + data.size() + " examples",
@@ -132,12 +140,12 @@ public final class Auditor {
         }
     }
 
-    private static List<String> tableNotes(ClaimTable table, ClassificationData data, Long population, Reproduction r) {
+    private static List<String> tableNotes(ClaimTable table, EvaluationData data, Long population, boolean manifestGiven) {
         List<String> notes = new ArrayList<>();
         if (population == null) {
             notes.add("the test-set size is unknown, so intervals use infinite-population methods; "
                     + "set test_size to use the finite-population correction");
-        } else if (data.size() < population && r.options().manifest() == null) {
+        } else if (data.size() < population && !manifestGiven) {
             notes.add("no subsample manifest was given: the statistics assume the " + data.size() + " examples are a simple "
                     + "random sample of the " + population + "-item test set");
         }

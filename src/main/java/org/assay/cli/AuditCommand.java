@@ -9,6 +9,7 @@ import org.assay.audit.AuditFileReader;
 import org.assay.audit.AuditRequest;
 import org.assay.audit.AuditResult;
 import org.assay.audit.Auditor;
+import org.assay.audit.ClassificationReproduction;
 import org.assay.audit.Reproduction;
 import org.assay.common.UserInputException;
 import org.assay.report.JsonReport;
@@ -106,7 +107,7 @@ final class AuditCommand implements Callable<Integer> {
             throw UserInputException.usage("audit needs --claims FILE and --predictions FILE (or an audit file)",
                     "see 'assay audit --help'");
         }
-        Reproduction r = new Reproduction(table, row, predictions, columns.readOptions());
+        Reproduction r = new ClassificationReproduction(table, row, predictions, columns.readOptions());
         return new AuditRequest(claims, List.of(r), estimation.settings(), (margin == null ? 1.0 : margin) / 100);
     }
 }

@@ -10,13 +10,22 @@ import org.assay.stats.Resampled;
  * @param successes  for COUNT metrics: units with outcome 1; otherwise -1
  * @param scores     for ROC_AUC: the positive-class scores; otherwise null
  * @param positive   for ROC_AUC: whether each unit is a positive; otherwise null
+ * @param notComputable why these outputs cannot give this metric (a K beyond the scored depth), or null
+ * @param configuration the settings the value depends on, in one line (generation metrics), or null
  */
 public record PreparedMetric(
         MetricDefinition definition,
         Resampled statistic,
         long successes,
         double[] scores,
-        boolean[] positive) {
+        boolean[] positive,
+        String notComputable,
+        String configuration) {
+
+    public PreparedMetric(MetricDefinition definition, Resampled statistic, long successes, double[] scores,
+                          boolean[] positive) {
+        this(definition, statistic, successes, scores, positive, null, null);
+    }
 
     public double value() { return statistic.estimate(); }
 

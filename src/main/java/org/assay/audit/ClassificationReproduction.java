@@ -1,0 +1,28 @@
+package org.assay.audit;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.assay.data.ClassificationData;
+import org.assay.data.ClassificationReader;
+import org.assay.data.ReadOptions;
+
+/**
+ * A classification reproduction: one predictions file for one table row.
+ *
+ * @param options how to read it (columns, positive class, manifest, truth)
+ */
+public record ClassificationReproduction(String tableId, String row, Path predictions, ReadOptions options)
+        implements Reproduction {
+
+    @Override
+    public Outputs read() {
+        ClassificationData data = ClassificationReader.read(predictions, options);
+        String where = tableId == null ? "" : " for " + tableId;
+        List<InputFile> inputs = new ArrayList<>();
+        inputs.add(InputFile.of("predictions" + where, predictions));
+        if (options.manifest() != null) inputs.add(InputFile.of("manifest" + where, options.manifest()));
+        if (options.truth() != null) inputs.add(InputFile.of("truth" + where, options.truth()));
+        return new Outputs(List.of(new Part(null, null, data, options.manifest() != null, "predictions")), inputs);
+    }
+}
