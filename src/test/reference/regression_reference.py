@@ -90,6 +90,7 @@ def main():
         degenerate = {
             "target": constant_t.tolist(),
             "prediction": constant_p.tolist(),
+            "mae": float(metrics.mean_absolute_error(constant_t, constant_p)),
             "r2_default": float(metrics.r2_score(constant_t, constant_p)),
             "r2_force_finite_false": str(metrics.r2_score(constant_t, constant_p, force_finite=False)),
             "pearson": str(stats.pearsonr(constant_p, constant_t)[0]),
