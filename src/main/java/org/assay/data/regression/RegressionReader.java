@@ -1,0 +1,38 @@
+package org.assay.data.regression;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.math3.util.ResizableDoubleArray;
+import org.assay.data.TableRows;
+
+/**
+ * Reads regression predictions: CSV, TSV or JSON Lines (chosen by extension), one example per
+ * row with an id, the true value and the predicted value. Parsing, number checks and id checks
+ * are the ones the classification reader uses (through {@link TableRows}); every problem is a
+ * {@link org.assay.common.UserInputException} naming the file and line.
+ */
+public final class RegressionReader {
+    private RegressionReader() {}
+
+    public static RegressionData read(Path file, RegressionColumns columns) {
+        try (TableRows rows = TableRows.open(file, "predictions file")) {
+            int id = rows.requireColumn(columns.id(), "the example ids",
+                    "set --id-column to the column that holds the example ids");
+            int target = rows.requireColumn(columns.target(), "the true values",
+                    "set --target-column to the column that holds the true values");
+            int prediction = rows.requireColumn(columns.prediction(), "the predicted values",
+                    "set --prediction-column to the column that holds the predicted values");
+            rows.requireFirstRow();
+            List<String> ids = new ArrayList<>();
+            ResizableDoubleArray truth = new ResizableDoubleArray();
+            ResizableDoubleArray predicted = new ResizableDoubleArray();
+            do {
+                ids.add(rows.uniqueId(id));
+                truth.addElement(rows.number(target));
+                predicted.addElement(rows.number(prediction));
+            } while (rows.next());
+            return new RegressionData(file, List.copyOf(ids), truth.getElements(), predicted.getElements());
+        }
+    }
+}
