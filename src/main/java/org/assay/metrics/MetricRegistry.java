@@ -11,6 +11,7 @@ public final class MetricRegistry {
 
     static {
         for (MetricDefinition d : ClassificationMetrics.all()) BY_ID.put(d.id(), d);
+        for (MetricDefinition d : TaskMetrics.regression()) BY_ID.put(d.id(), d);
     }
 
     private MetricRegistry() {}

@@ -7,7 +7,7 @@ public enum Task {
     CLASSIFICATION(org.assay.data.ClassificationData.class),
     RETRIEVAL(org.assay.data.EvaluationData.class),
     GENERATION(org.assay.data.EvaluationData.class),
-    REGRESSION(org.assay.data.EvaluationData.class);
+    REGRESSION(org.assay.data.regression.RegressionData.class);
 
     private final Class<? extends org.assay.data.EvaluationData> dataType;
 

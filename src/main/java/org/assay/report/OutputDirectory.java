@@ -23,8 +23,15 @@ public final class OutputDirectory {
         this.force = force;
     }
 
-    /** Writes {@code files} (name to content); returns the paths written. */
+    /** Writes {@code files} (name to text, UTF-8); returns the paths written. */
     public java.util.List<Path> write(Map<String, String> files) {
+        Map<String, byte[]> bytes = new java.util.LinkedHashMap<>();
+        files.forEach((name, text) -> bytes.put(name, text.getBytes(StandardCharsets.UTF_8)));
+        return writeBytes(bytes);
+    }
+
+    /** Writes {@code files} (name to bytes); returns the paths written. */
+    public java.util.List<Path> writeBytes(Map<String, byte[]> files) {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
             throw new UserInputException(dir, null, "the output path exists and is not a folder", "choose another --out");
         }
@@ -39,11 +46,11 @@ public final class OutputDirectory {
         try {
             Files.createDirectories(dir);
             java.util.List<Path> written = new java.util.ArrayList<>();
-            for (Map.Entry<String, String> e : files.entrySet()) {
+            for (Map.Entry<String, byte[]> e : files.entrySet()) {
                 Path target = dir.resolve(e.getKey());
                 Path tmp = Files.createTempFile(dir, "." + e.getKey() + ".", ".tmp");
                 try {
-                    Files.writeString(tmp, e.getValue(), StandardCharsets.UTF_8);
+                    Files.write(tmp, e.getValue());
                     move(tmp, target);
                 } finally {
                     Files.deleteIfExists(tmp);

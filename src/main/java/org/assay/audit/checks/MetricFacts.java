@@ -33,6 +33,8 @@ public record MetricFacts(String id, double lowest, double highest, boolean high
         put("mae", 0, INF, false, false);
         put("rmse", 0, INF, false, false);
         put("r2", -INF, 1, true, false);
+        put("pearson", -1, 1, true, false);
+        put("spearman", -1, 1, true, false);
     }
 
     private static void put(String id, double lo, double hi, boolean higher, boolean count) {

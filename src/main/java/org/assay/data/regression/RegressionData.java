@@ -7,7 +7,8 @@ import java.util.List;
  * Regression predictions, one example per index: its id, true value and predicted value.
  * All values are finite; ids are distinct.
  */
-public record RegressionData(Path source, List<String> ids, double[] target, double[] prediction) {
+public record RegressionData(Path source, List<String> ids, double[] target, double[] prediction)
+        implements org.assay.data.EvaluationData {
 
     public RegressionData {
         if (ids.size() != target.length || target.length != prediction.length) {
@@ -17,4 +18,6 @@ public record RegressionData(Path source, List<String> ids, double[] target, dou
     }
 
     public int size() { return target.length; }
+
+    @Override public List<String> warnings() { return List.of(); }
 }
