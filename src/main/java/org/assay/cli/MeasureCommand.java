@@ -14,8 +14,8 @@ import java.util.concurrent.Callable;
 import org.assay.audit.Measurement;
 import org.assay.audit.Measurer;
 import org.assay.common.UserInputException;
-import org.assay.data.ClassificationData;
-import org.assay.data.ClassificationReader;
+import org.assay.audit.Reproduction;
+import org.assay.metrics.Task;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -35,11 +35,12 @@ import picocli.CommandLine.Model.CommandSpec;
 final class MeasureCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", description = "Predictions file (CSV, TSV or JSONL).")
+    @Parameters(paramLabel = "FILE", arity = "0..1",
+            description = "Predictions file (CSV, TSV or JSONL); retrieval reads --scores or --ranked instead.")
     Path file;
 
     @Option(names = "--task", paramLabel = "TASK", defaultValue = "classification",
-            description = "Task of the predictions: classification (default).")
+            description = "Task of the outputs: classification (default), retrieval, generation or regression.")
     String task;
 
     @Option(names = "--metric", paramLabel = "NAME", split = ",", required = true,
@@ -54,15 +55,13 @@ final class MeasureCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text", description = "text (default) or json.")
     String format;
 
-    @Mixin ColumnOptions columns;
+    @Mixin TaskInputs inputs;
 
     @Mixin EstimationOptions estimation;
 
     @Override
     public Integer call() throws Exception {
-        if (!task.equals("classification")) {
-            throw UserInputException.usage("task '" + task + "' is not supported yet", "use --task classification");
-        }
+        Task t = Task.parse(task);
         if (!format.equals("text") && !format.equals("json")) {
             throw UserInputException.usage("unknown --format '" + format + "'", "use text or json");
         }
@@ -71,15 +70,22 @@ final class MeasureCommand implements Callable<Integer> {
         }
         List<Measurer.MetricRequest> requests = new ArrayList<>();
         for (String m : metrics) requests.add(parseMetric(m));
-        ClassificationData data = ClassificationReader.read(file, columns.readOptions());
-        List<Measurement> results = new Measurer(estimation.settings()).measure(data, requests, testSize);
+        Reproduction.Outputs outputs = inputs.reproduction(t, file).read();
+        List<PartResult> results = new ArrayList<>();
+        Measurer measurer = new Measurer(estimation.settings());
+        for (Reproduction.Part part : outputs.parts()) {
+            results.add(new PartResult(part, measurer.measure(part.data(), requests, testSize)));
+        }
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        data.warnings().forEach(w -> err.println("assay: " + w));
-        out.print(format.equals("json") ? json(data, results) : text(results));
+        outputs.parts().forEach(p -> p.data().warnings().forEach(w -> err.println("assay: " + w)));
+        out.print(format.equals("json") ? json(t, results) : text(results));
         out.flush();
         return Main.DONE;
     }
+
+    /** The measurements of one part of the outputs (one retrieval direction, say). */
+    record PartResult(Reproduction.Part part, List<Measurement> measurements) {}
 
     static Measurer.MetricRequest parseMetric(String text) {
         String t = text.trim();
@@ -94,16 +100,22 @@ final class MeasureCommand implements Callable<Integer> {
         return new Measurer.MetricRequest(t.substring(0, colon), params);
     }
 
-    private String text(List<Measurement> results) {
+    private String text(List<PartResult> parts) {
         StringBuilder sb = new StringBuilder();
         String fmt = "%-24s %8s %10s  %-22s %s%n";
-        sb.append(String.format(Locale.ROOT, fmt, "metric", "n", "value", "interval", "method"));
-        for (Measurement m : results) {
-            sb.append(String.format(Locale.ROOT, fmt, label(m), m.n(), String.format(Locale.ROOT, "%.4f", m.value()),
-                    String.format(Locale.ROOT, "[%.4f, %.4f]", m.interval().lower(), m.interval().upper()),
-                    m.interval().method()));
+        for (PartResult part : parts) {
+            if (parts.size() > 1 || part.part().columnPrefix() != null) {
+                sb.append(part.part().description()).append(":\n");
+            }
+            sb.append(String.format(Locale.ROOT, fmt, "metric", "n", "value", "interval", "method"));
+            for (Measurement m : part.measurements()) {
+                sb.append(String.format(Locale.ROOT, fmt, label(m), m.n(), String.format(Locale.ROOT, "%.4f", m.value()),
+                        String.format(Locale.ROOT, "[%.4f, %.4f]", m.interval().lower(), m.interval().upper()),
+                        m.interval().method()));
+            }
+            part.measurements().stream().flatMap(m -> m.notes().stream()).distinct()
+                    .forEach(n -> sb.append("note: ").append(n).append('\n'));
         }
-        results.stream().flatMap(m -> m.notes().stream()).distinct().forEach(n -> sb.append("note: ").append(n).append('\n'));
         return sb.toString();
     }
 
@@ -114,36 +126,41 @@ final class MeasureCommand implements Callable<Integer> {
         return sb.substring(0, sb.length() - 1);
     }
 
-    private String json(ClassificationData data, List<Measurement> results) throws Exception {
+    private String json(Task t, List<PartResult> parts) throws Exception {
         ObjectMapper mapper = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
         ObjectNode root = mapper.createObjectNode();
         root.put("schema_version", 1);
-        root.put("file", file.toString());
-        root.put("task", task);
-        root.put("n", data.size());
+        if (file == null) root.putNull("file"); else root.put("file", file.toString());
+        root.put("task", t.id());
+        root.put("n", parts.get(0).part().data().size());
         if (testSize == null) root.putNull("test_size"); else root.put("test_size", testSize);
         var s = estimation.settings();
         root.put("confidence", s.confidence());
         root.put("seed", s.seed());
         root.put("resamples", s.resamples());
         ArrayNode arr = root.putArray("metrics");
-        for (Measurement m : results) {
-            ObjectNode o = arr.addObject();
-            o.put("metric", m.metric());
-            ObjectNode p = o.putObject("params");
-            m.params().forEach(p::put);
-            o.put("value", m.value());
-            ObjectNode i = o.putObject("interval");
-            i.put("lower", m.interval().lower());
-            i.put("upper", m.interval().upper());
-            i.put("confidence", m.interval().confidence());
-            i.put("method", m.interval().method());
-            o.put("standard_error", m.standardError());
-            ArrayNode notes = o.putArray("notes");
-            m.notes().forEach(notes::add);
+        ArrayNode w = mapper.createArrayNode();
+        for (PartResult part : parts) {
+            part.part().data().warnings().forEach(w::add);
+            for (Measurement m : part.measurements()) {
+                ObjectNode o = arr.addObject();
+                o.put("metric", m.metric());
+                if (part.part().columnPrefix() != null) o.put("direction", part.part().columnPrefix());
+                ObjectNode p = o.putObject("params");
+                m.params().forEach(p::put);
+                o.put("n", m.n());
+                o.put("value", m.value());
+                ObjectNode i = o.putObject("interval");
+                i.put("lower", m.interval().lower());
+                i.put("upper", m.interval().upper());
+                i.put("confidence", m.interval().confidence());
+                i.put("method", m.interval().method());
+                o.put("standard_error", m.standardError());
+                ArrayNode notes = o.putArray("notes");
+                m.notes().forEach(notes::add);
+            }
         }
-        ArrayNode w = root.putArray("warnings");
-        data.warnings().forEach(w::add);
+        root.set("warnings", w);
         return mapper.writeValueAsString(root) + "\n";
     }
 }

@@ -1,0 +1,38 @@
+package org.assay.cli;
+
+import java.nio.file.Path;
+import org.assay.audit.ClassificationReproduction;
+import org.assay.audit.RegressionReproduction;
+import org.assay.audit.Reproduction;
+import org.assay.common.UserInputException;
+import org.assay.data.regression.RegressionColumns;
+import org.assay.metrics.Task;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** Where a task's outputs are and how to read them: the options `measure` shares across tasks. */
+final class TaskInputs {
+    @Mixin ColumnOptions columns;
+
+    @Option(names = "--target-column", paramLabel = "NAME", defaultValue = "target",
+            description = "Regression: true-value column (default ${DEFAULT-VALUE}).")
+    String target;
+
+    /** The outputs to read for a task, as one reproduction with no table or row. */
+    Reproduction reproduction(Task task, Path file) {
+        return switch (task) {
+            case CLASSIFICATION -> new ClassificationReproduction(null, null, required(file, task), columns.readOptions());
+            case REGRESSION -> new RegressionReproduction(null, null, required(file, task),
+                    new RegressionColumns(columns.id, target, columns.prediction));
+            default -> throw UserInputException.usage("task '" + task.id() + "' is not supported yet",
+                    "use --task classification or regression");
+        };
+    }
+
+    private static Path required(Path file, Task task) {
+        if (file == null) {
+            throw UserInputException.usage("no predictions file given", "name the " + task.id() + " predictions file");
+        }
+        return file;
+    }
+}
