@@ -13,6 +13,8 @@ import java.util.List;
 import java.util.Set;
 import org.assay.common.UserInputException;
 import org.assay.data.ReadOptions;
+import org.assay.data.regression.RegressionColumns;
+import org.assay.metrics.Task;
 
 /**
  * Reads an audit file: the claims file and, per reproduced table row, the predictions and how
@@ -29,12 +31,18 @@ import org.assay.data.ReadOptions;
  *     truth: truth.csv              # optional
  *     positive: "1"                 # optional
  *     columns: {id: clip, label: species, prediction: predicted, score: score, probability_prefix: p_}
+ *   - table: T4
+ *     task: regression               # classification (default) or regression
+ *     predictions: counts.csv
+ *     columns: {id: image, target: true_count, prediction: predicted_count}
  * </pre>
  */
 public final class AuditFileReader {
     private static final Set<String> TOP = Set.of("claims", "margin", "reproductions");
-    private static final Set<String> REPRO = Set.of("table", "row", "predictions", "manifest", "truth", "positive", "columns");
+    private static final Set<String> REPRO = Set.of("table", "row", "task", "predictions", "manifest", "truth", "positive",
+            "columns");
     private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
+    private static final Set<String> REGRESSION_COLUMNS = Set.of("id", "target", "prediction");
 
     /** The parsed audit file: claims path, reproductions, and a margin in points or null. */
     public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints) {}
@@ -80,8 +88,17 @@ public final class AuditFileReader {
             String at = "/reproductions/" + i;
             if (!r.isObject()) throw new UserInputException(file, at, "each reproduction must be a mapping", null);
             checkFields(file, r, REPRO, at);
+            Task task = r.has("task") ? task(file, at, r.get("task").asText()) : Task.CLASSIFICATION;
             Path predictions = path(file, base, r, "predictions", at);
             if (predictions == null) throw new UserInputException(file, at, "missing 'predictions:'", "name the predictions file");
+            if (task == Task.REGRESSION) {
+                out.add(regression(file, r, at, predictions));
+                continue;
+            }
+            if (task != Task.CLASSIFICATION) {
+                throw new UserInputException(file, at + "/task", "task '" + task.id() + "' cannot be audited yet",
+                        "use classification or regression");
+            }
             ReadOptions o = ReadOptions.defaults();
             JsonNode cols = r.get("columns");
             String id = o.idColumn(), label = o.labelColumn(), pred = o.predictionColumn(), score = o.scoreColumn(),
@@ -99,6 +116,31 @@ public final class AuditFileReader {
             out.add(new ClassificationReproduction(text(r, "table", null), text(r, "row", null), predictions, o));
         }
         return new AuditFile(claims, out, margin);
+    }
+
+    private static Task task(Path file, String at, String text) {
+        try {
+            return Task.parse(text);
+        } catch (UserInputException e) {
+            throw new UserInputException(file, at + "/task", e.problem(), e.fix());
+        }
+    }
+
+    private static Reproduction regression(Path file, JsonNode r, String at, Path predictions) {
+        for (String f : List.of("manifest", "truth", "positive")) {
+            if (r.has(f)) throw new UserInputException(file, at + "/" + f, "'" + f + "' is not used by regression", "remove it");
+        }
+        RegressionColumns d = RegressionColumns.defaults();
+        String id = d.id(), target = d.target(), prediction = d.prediction();
+        JsonNode cols = r.get("columns");
+        if (cols != null) {
+            checkFields(file, cols, REGRESSION_COLUMNS, at + "/columns");
+            id = text(cols, "id", id);
+            target = text(cols, "target", target);
+            prediction = text(cols, "prediction", prediction);
+        }
+        return new RegressionReproduction(text(r, "table", null), text(r, "row", null), predictions,
+                new RegressionColumns(id, target, prediction));
     }
 
     private static void checkFields(Path file, JsonNode node, Set<String> allowed, String at) {
