@@ -44,6 +44,7 @@ public final class Auditor {
             }
 
             Map<String, Evidence> cache = new HashMap<>();
+            Map<String, String> settingsOf = new HashMap<>();
             for (Claim c : table.claims()) {
                 if (!row.equals(c.row())) continue;
                 audited.add(c);
@@ -72,6 +73,12 @@ public final class Auditor {
                         if (m.notComputable() != null) throw UserInputException.usage(m.notComputable(), null);
                         evidence = estimator.evidence(m, population);
                         cache.put(key, evidence);
+                        if (m.configuration() != null) settingsOf.put(key, m.configuration());
+                    }
+                    if (settingsOf.containsKey(key)) {
+                        // a generation score means little without the settings it was computed with
+                        tableNotes = new ArrayList<>(tableNotes);
+                        tableNotes.add("computed with " + settingsOf.get(key));
                     }
                 } catch (UserInputException e) {
                     findings.add(Finding.notComputable(c, ci[0], ci[1], e.problem()));

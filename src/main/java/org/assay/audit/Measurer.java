@@ -25,9 +25,15 @@ public final class Measurer {
         List<Measurement> out = new ArrayList<>();
         for (MetricRequest r : metrics) {
             PreparedMetric m = MetricRegistry.get(r.id()).prepare(data, r.params());
+            if (m.notComputable() != null) {
+                throw org.assay.common.UserInputException.usage(r.id() + " cannot be computed: " + m.notComputable(),
+                        "choose a metric these outputs support");
+            }
             Evidence e = estimator.evidence(m, population);
+            List<String> notes = new ArrayList<>(e.notes());
+            if (m.configuration() != null) notes.add("computed with " + m.configuration());
             out.add(new Measurement(r.id(), r.params(), data.size(), population, e.estimate(),
-                    e.interval(settings.confidence()), e.standardError(), e.notes()));
+                    e.interval(settings.confidence()), e.standardError(), notes));
         }
         return out;
     }
