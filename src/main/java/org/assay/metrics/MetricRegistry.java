@@ -11,6 +11,8 @@ public final class MetricRegistry {
 
     static {
         for (MetricDefinition d : ClassificationMetrics.all()) BY_ID.put(d.id(), d);
+        for (MetricDefinition d : TaskMetrics.retrieval()) BY_ID.put(d.id(), d);
+        for (MetricDefinition d : TaskMetrics.generation()) BY_ID.put(d.id(), d);
         for (MetricDefinition d : TaskMetrics.regression()) BY_ID.put(d.id(), d);
     }
 

@@ -11,7 +11,10 @@ import java.util.stream.Stream;
 import org.assay.common.UserInputException;
 import org.assay.data.ClassificationData;
 import org.assay.data.EvaluationData;
+import org.assay.data.generation.GenerationData;
 import org.assay.data.regression.RegressionData;
+import org.assay.data.retrieval.RetrievalBothDirections;
+import org.assay.data.retrieval.RetrievalDirection;
 import org.assay.testing.ReferenceData;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -39,7 +42,7 @@ class MetricInvarianceTest {
     private static ClassificationData multiclass() { return TestData.fromReference(CASES.get(3)); }
 
     private static Map<String, String> params(MetricDefinition d) {
-        return d.params().contains("k") ? Map.of("k", "2") : Map.of();
+        return d.params().contains("k") ? Map.of("k", d.task() == Task.RETRIEVAL ? "3" : "2") : Map.of();
     }
 
     /** Data the metric is defined on: binary for binary-only metrics, multiclass otherwise. */
@@ -67,20 +70,32 @@ class MetricInvarianceTest {
         return switch (d.task()) {
             case CLASSIFICATION -> classificationFor(d);
             case REGRESSION -> regression();
-            default -> throw new IllegalStateException("no test data for task " + d.task());
+            case RETRIEVAL -> d.id().equals("rsum")
+                    ? new RetrievalBothDirections(TaskTestData.retrieval(31, 40), TaskTestData.retrieval(32, 35))
+                    : TaskTestData.retrieval(31, 40);
+            case GENERATION -> TaskTestData.generation(41, 40);
         };
     }
 
     private static EvaluationData permuted(EvaluationData data, int[] perm) {
-        if (data instanceof ClassificationData c) return TestData.permuted(c, perm);
-        RegressionData r = (RegressionData) data;
-        return RegressionTestData.select(r, perm);
+        return select(data, perm);
     }
 
     private static EvaluationData repeated(EvaluationData data, int[] weights) {
-        if (data instanceof ClassificationData c) return TestData.repeated(c, weights);
-        RegressionData r = (RegressionData) data;
-        return RegressionTestData.select(r, RegressionTestData.repeat(weights));
+        return select(data, RegressionTestData.repeat(weights));
+    }
+
+    /** The units of {@code data} in another order or with repeats: unit index[j] is placed at j. */
+    private static EvaluationData select(EvaluationData data, int[] index) {
+        if (data instanceof ClassificationData c) return TestData.select(c, index);
+        if (data instanceof RegressionData r) return RegressionTestData.select(r, index);
+        if (data instanceof RetrievalDirection r) return TaskTestData.select(r, index);
+        if (data instanceof GenerationData g) return g.select(index);
+        RetrievalBothDirections b = (RetrievalBothDirections) data;
+        int na = b.first().size();
+        int[] ia = java.util.Arrays.stream(index).filter(i -> i < na).toArray();
+        int[] ib = java.util.Arrays.stream(index).filter(i -> i >= na).map(i -> i - na).toArray();
+        return new RetrievalBothDirections(TaskTestData.select(b.first(), ia), TaskTestData.select(b.second(), ib));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -65,4 +65,23 @@ final class TestData {
         }
         return new ClassificationData(d.source(), d.ids(), d.classes(), truth, pred, scores, probs, d.positive(), List.of());
     }
+
+    /** The examples in another order or with repeats: example index[j] is placed at j (ids renamed). */
+    static ClassificationData select(ClassificationData d, int[] index) {
+        int n = index.length, k = d.classCount();
+        int[] truth = new int[n];
+        int[] pred = d.predicted() == null ? null : new int[n];
+        double[] scores = d.scores() == null ? null : new double[n];
+        double[] probs = d.probabilities() == null ? null : new double[n * k];
+        String[] ids = new String[n];
+        for (int i = 0; i < n; i++) {
+            int j = index[i];
+            ids[i] = "r" + i;
+            truth[i] = d.truth()[j];
+            if (pred != null) pred[i] = d.predicted()[j];
+            if (scores != null) scores[i] = d.scores()[j];
+            if (probs != null) System.arraycopy(d.probabilities(), j * k, probs, i * k, k);
+        }
+        return new ClassificationData(d.source(), ids, d.classes(), truth, pred, scores, probs, d.positive(), List.of());
+    }
 }

@@ -8,6 +8,7 @@ import org.assay.common.UserInputException;
 import org.assay.data.retrieval.RetrievalData;
 import org.assay.metrics.OneHotUnitTable;
 import org.assay.metrics.SumStatistic;
+import org.assay.metrics.UnitMean;
 import org.assay.metrics.UnitTable;
 
 /**
@@ -58,6 +59,17 @@ public final class RetrievalMetrics {
         DEFINITIONS.put("rsum", "R@1 + R@5 + R@10 in both directions, in percent points (0 to 600)");
     }
 
+    private static final Map<String, String[]> TITLES_AND_REFERENCES = Map.of(
+            "recall_at_k", new String[] {"Recall@K (hit rate)", "hit rate at K, the usual meaning of R@K in cross-modal retrieval tables (common practice)"},
+            "relevant_recall_at_k", new String[] {"recall@K (relevant items retrieved)", "Manning, Raghavan & Schütze (2008) Introduction to Information Retrieval, ch. 8"},
+            "r_precision", new String[] {"R-precision", "Manning, Raghavan & Schütze (2008) Introduction to Information Retrieval, §8.4"},
+            "mrr", new String[] {"Mean reciprocal rank", "Voorhees (1999) TREC-8 Question Answering Track Report"},
+            "mean_rank", new String[] {"Mean rank of the first relevant item", "common practice in cross-modal retrieval"},
+            "median_rank", new String[] {"Median rank of the first relevant item", "common practice in cross-modal retrieval (MedR)"},
+            "ndcg_at_k", new String[] {"nDCG@K", "Järvelin & Kekäläinen (2002) ACM TOIS 20:422-446; binary gains as scikit-learn ndcg_score"},
+            "map_at_k", new String[] {"mAP@K", "Manning, Raghavan & Schütze (2008) Introduction to Information Retrieval, §8.4; min(R, k) normaliser (common practice)"},
+            "rsum", new String[] {"RSUM", "sum of R@1, R@5, R@10 in both directions (common practice in image-text retrieval)"});
+
     private static final Map<String, Set<String>> PARAMS = Map.of(
             "recall_at_k", Set.of("k"), "relevant_recall_at_k", Set.of("k"), "ndcg_at_k", Set.of("k"),
             "map_at_k", Set.of("k"), "mrr", Set.of("k"), "r_precision", Set.of(), "mean_rank", Set.of(),
@@ -70,6 +82,18 @@ public final class RetrievalMetrics {
     public static String definition(String id) {
         requireKnown(id);
         return DEFINITIONS.get(id);
+    }
+
+    /** The metric's name as tables print it. */
+    public static String title(String id) {
+        requireKnown(id);
+        return TITLES_AND_REFERENCES.get(id)[0];
+    }
+
+    /** Where the metric's definition comes from. */
+    public static String reference(String id) {
+        requireKnown(id);
+        return TITLES_AND_REFERENCES.get(id)[1];
     }
 
     /** Parameter names the metric takes. */
@@ -145,7 +169,7 @@ public final class RetrievalMetrics {
         double[] perQuery = new double[n];
         for (int q = 0; q < n; q++) perQuery[q] = perQuery(id, k, data.relevantRanks()[q]);
         if (id.equals("median_rank")) return new RetrievalMeasure(new WeightedMedian(perQuery), null, null);
-        return new RetrievalMeasure(PerQueryMean.statistic(perQuery), null, null);
+        return new RetrievalMeasure(UnitMean.statistic(perQuery), null, null);
     }
 
     /** One query's contribution (its statistic) to a mean-over-queries metric. */
