@@ -14,6 +14,10 @@ import java.util.Set;
 import org.assay.common.UserInputException;
 import org.assay.data.ReadOptions;
 import org.assay.data.regression.RegressionColumns;
+import org.assay.data.retrieval.MatrixRanking;
+import org.assay.data.retrieval.RetrievalInput;
+import org.assay.data.retrieval.SentinelRule;
+import org.assay.data.retrieval.TiePolicy;
 import org.assay.metrics.Task;
 
 /**
@@ -32,15 +36,27 @@ import org.assay.metrics.Task;
  *     positive: "1"                 # optional
  *     columns: {id: clip, label: species, prediction: predicted, score: score, probability_prefix: p_}
  *   - table: T4
- *     task: regression               # classification (default) or regression
+ *     task: regression               # classification (default), retrieval or regression
  *     predictions: counts.csv
  *     columns: {id: image, target: true_count, prediction: predicted_count}
- * </pre>
+ *   - table: T1
+ *     task: retrieval
+ *     ties: pessimistic              # optimistic | pessimistic (default) | average
+ *     manifest: subsample.txt        # optional: the first direction's sampled query ids
+ *     directions:                    # one or two
+ *       - column: "Image→Text"       # claims whose column path starts with this
+ *         scores: i2t.npy            # or ranked: lists.jsonl
+ *         side: rows                 # rows (default) or columns hold the queries
+ *         relevance: i2t.json        # or group_size: 5
+ *         sentinel: -100             # auto (default), none, or the value</pre>
  */
 public final class AuditFileReader {
     private static final Set<String> TOP = Set.of("claims", "margin", "reproductions");
     private static final Set<String> REPRO = Set.of("table", "row", "task", "predictions", "manifest", "truth", "positive",
             "columns");
+    private static final Set<String> RETRIEVAL = Set.of("table", "row", "task", "ties", "directions", "manifest");
+    private static final Set<String> DIRECTION = Set.of("column", "scores", "ranked", "side", "relevance", "group_size",
+            "sentinel");
     private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
     private static final Set<String> REGRESSION_COLUMNS = Set.of("id", "target", "prediction");
 
@@ -87,8 +103,12 @@ public final class AuditFileReader {
             JsonNode r = list.get(i);
             String at = "/reproductions/" + i;
             if (!r.isObject()) throw new UserInputException(file, at, "each reproduction must be a mapping", null);
-            checkFields(file, r, REPRO, at);
             Task task = r.has("task") ? task(file, at, r.get("task").asText()) : Task.CLASSIFICATION;
+            if (task == Task.RETRIEVAL) {
+                out.add(retrieval(file, base, r, at));
+                continue;
+            }
+            checkFields(file, r, REPRO, at);
             Path predictions = path(file, base, r, "predictions", at);
             if (predictions == null) throw new UserInputException(file, at, "missing 'predictions:'", "name the predictions file");
             if (task == Task.REGRESSION) {
@@ -97,7 +117,7 @@ public final class AuditFileReader {
             }
             if (task != Task.CLASSIFICATION) {
                 throw new UserInputException(file, at + "/task", "task '" + task.id() + "' cannot be audited yet",
-                        "use classification or regression");
+                        "use classification, retrieval or regression");
             }
             ReadOptions o = ReadOptions.defaults();
             JsonNode cols = r.get("columns");
@@ -141,6 +161,76 @@ public final class AuditFileReader {
         }
         return new RegressionReproduction(text(r, "table", null), text(r, "row", null), predictions,
                 new RegressionColumns(id, target, prediction));
+    }
+
+    /** A retrieval row: one or two directions, each a score matrix or ranked lists with its relevance. */
+    private static Reproduction retrieval(Path file, Path base, JsonNode r, String at) {
+        checkFields(file, r, RETRIEVAL, at);
+        TiePolicy ties = TiePolicy.DEFAULT;
+        if (r.has("ties")) {
+            try {
+                ties = TiePolicy.parse(r.get("ties").asText());
+            } catch (UserInputException e) {
+                throw new UserInputException(file, at + "/ties", e.problem(), e.fix());
+            }
+        }
+        JsonNode list = r.get("directions");
+        if (list == null || !list.isArray() || list.isEmpty() || list.size() > 2) {
+            throw new UserInputException(file, at + "/directions", "a retrieval reproduction lists one or two directions",
+                    "add 'directions:' with, per direction, 'column:', 'scores:' and 'relevance:'");
+        }
+        List<RetrievalInput> inputs = new ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            JsonNode d = list.get(i);
+            String dat = at + "/directions/" + i;
+            if (!d.isObject()) throw new UserInputException(file, dat, "each direction must be a mapping", null);
+            checkFields(file, d, DIRECTION, dat);
+            String column = text(d, "column", null);
+            if (column == null && list.size() == 2) {
+                throw new UserInputException(file, dat + "/column", "with two directions each needs 'column:'",
+                        "give the first element of the column path of the claims it serves, for example column: \"Image→Text\"");
+            }
+            MatrixRanking.Side side = MatrixRanking.Side.ROWS;
+            if (d.has("side")) {
+                String sideText = d.get("side").asText().strip().toLowerCase(java.util.Locale.ROOT);
+                if (!sideText.equals("rows") && !sideText.equals("columns")) {
+                    throw new UserInputException(file, dat + "/side", "side is '" + sideText + "'",
+                            "use rows (queries are the matrix rows, the default) or columns");
+                }
+                side = sideText.equals("rows") ? MatrixRanking.Side.ROWS : MatrixRanking.Side.COLUMNS;
+            }
+            Integer group = null;
+            if (d.has("group_size")) {
+                if (!d.get("group_size").canConvertToInt()) {
+                    throw new UserInputException(file, dat + "/group_size", "group_size must be a whole number", "for example group_size: 5");
+                }
+                group = d.get("group_size").asInt();
+            }
+            SentinelRule sentinel = SentinelRule.detect();
+            if (d.has("sentinel")) sentinel = sentinel(file, dat + "/sentinel", d.get("sentinel").asText());
+            try {
+                inputs.add(new RetrievalInput(column == null ? "queries" : column, path(file, base, d, "scores", dat), side,
+                        path(file, base, d, "ranked", dat), path(file, base, d, "relevance", dat), false, group, ties, sentinel));
+            } catch (UserInputException e) {
+                throw new UserInputException(file, dat, e.problem(), e.fix());
+            }
+        }
+        boolean prefixed = inputs.size() == 2 || text(list.get(0), "column", null) != null;
+        return new RetrievalReproduction(text(r, "table", null), text(r, "row", null), inputs, prefixed,
+                path(file, base, r, "manifest", at));
+    }
+
+    /** "auto" (detect a repeated minimum), "none", or the sentinel value itself. */
+    public static SentinelRule sentinel(Path file, String at, String text) {
+        String t = text.strip().toLowerCase(java.util.Locale.ROOT);
+        if (t.equals("auto")) return SentinelRule.detect();
+        if (t.equals("none")) return SentinelRule.none();
+        try {
+            return SentinelRule.value(Double.parseDouble(t));
+        } catch (NumberFormatException e) {
+            throw new UserInputException(file, at, "sentinel is '" + text + "'",
+                    "use auto (the default), none, or the value that fills unscored candidates, such as -100");
+        }
     }
 
     private static void checkFields(Path file, JsonNode node, Set<String> allowed, String at) {

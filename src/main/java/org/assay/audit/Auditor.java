@@ -39,7 +39,7 @@ public final class Auditor {
             Reproduction.Outputs outputs = r.read();
             inputs.addAll(outputs.inputs());
             for (Reproduction.Part part : outputs.parts()) {
-                warnings.addAll(part.data().warnings());
+                part.data().warnings().stream().filter(w -> !warnings.contains(w)).forEach(warnings::add);
                 checkSizes(claims, table, part.data(), table.testSize() == null ? null : table.testSize().longValue());
             }
 
@@ -64,6 +64,9 @@ public final class Auditor {
                 Integer size = c.testSizeIn(table);
                 Long population = size == null ? null : size.longValue();
                 List<String> tableNotes = tableNotes(table, data, population, part.manifestGiven());
+                if (data instanceof org.assay.data.retrieval.RetrievalDirection d) {
+                    tableNotes.add("ranked " + d.describe());   // the tie policy and depth the value depends on
+                }
                 Evidence evidence;
                 try {
                     String key = System.identityHashCode(part) + c.metric() + c.params() + population;

@@ -25,9 +25,9 @@ public final class Measurer {
         List<Measurement> out = new ArrayList<>();
         for (MetricRequest r : metrics) {
             PreparedMetric m = MetricRegistry.get(r.id()).prepare(data, r.params());
-            if (m.notComputable() != null) {
-                throw org.assay.common.UserInputException.usage(r.id() + " cannot be computed: " + m.notComputable(),
-                        "choose a metric these outputs support");
+            if (m.notComputable() != null) {   // listed with its reason, never scored (a K beyond the scored depth)
+                out.add(Measurement.notComputable(r.id(), r.params(), data.size(), population, m.notComputable()));
+                continue;
             }
             Evidence e = estimator.evidence(m, population);
             List<String> notes = new ArrayList<>(e.notes());

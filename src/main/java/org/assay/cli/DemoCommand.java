@@ -3,7 +3,6 @@ package org.assay.cli;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -24,17 +23,28 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /**
- * {@code assay demo}: copies the bundled invented scenario (examples/birdcalls) into a folder
- * and audits it, so a new user sees a whole report in one command.
+ * {@code assay demo}: copies a bundled invented scenario (examples/birdcalls or examples/harbour)
+ * into a folder and audits it, so a new user sees a whole report in one command.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = {"Audits a bundled, invented example and writes its report.",
-            "A bird-call classifier's paper claims accuracy, macro F1, top-3 accuracy and ROC AUC on 4,000 "
-                + "clips; a replicator re-ran it on a random 400-clip subsample. Writes the inputs and "
-                + "report.md / report.json to --out.", ""},
-        footer = {"", "Example:", "  assay demo --out assay-demo && less assay-demo/report.md"})
+            "birdcalls (default): a bird-call classifier's paper claims accuracy, macro F1, top-3 accuracy and "
+                + "ROC AUC on 4,000 clips; a replicator re-ran it on a random 400-clip subsample.",
+            "harbour: a photo-caption retrieval paper claims Recall@K both ways on 2,000 photos x 3 captions; "
+                + "a replicator re-ran 150 photos, with scores kept only for each query's top 24.",
+            "Writes the inputs and report.md / report.json to --out.", ""},
+        footer = {"", "Examples:", "  assay demo --out assay-demo && less assay-demo/report.md",
+            "  assay demo --scenario harbour --out harbour-demo"})
 final class DemoCommand implements Callable<Integer> {
-    static final List<String> FILES = List.of("claims.yaml", "audit.yaml", "predictions.csv", "subsample.txt", "README.md");
+    /** The files of each bundled scenario, copied as they are (binary safe). */
+    static final Map<String, List<String>> SCENARIOS = Map.of(
+            "birdcalls", List.of("claims.yaml", "audit.yaml", "predictions.csv", "subsample.txt", "README.md"),
+            "harbour", List.of("claims.yaml", "audit.yaml", "scores-photo-to-caption.npy", "scores-caption-to-photo.npy",
+                    "relevance-photo-to-caption.json", "relevance-caption-to-photo.json", "subsample.txt", "README.md"));
+
+    @Option(names = "--scenario", paramLabel = "NAME", defaultValue = "birdcalls",
+            description = "birdcalls (classification, the default) or harbour (retrieval).")
+    String scenario;
 
     @Spec CommandSpec spec;
 
@@ -48,10 +58,14 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        for (String f : FILES) inputs.put(f, resource("/examples/birdcalls/" + f));
+        List<String> names = SCENARIOS.get(scenario);
+        if (names == null) {
+            throw org.assay.common.UserInputException.usage("unknown --scenario '" + scenario + "'", "use birdcalls or harbour");
+        }
+        Map<String, byte[]> inputs = new LinkedHashMap<>();
+        for (String f : names) inputs.put(f, resource("/examples/" + scenario + "/" + f));
         Path inputDir = out.resolve("inputs");
-        new OutputDirectory(inputDir, force).write(inputs);
+        new OutputDirectory(inputDir, force).writeBytes(inputs);
         AuditFileReader.AuditFile f = AuditFileReader.read(inputDir.resolve("audit.yaml"));
         double margin = f.marginPoints() == null ? 1.0 : f.marginPoints();
         AuditResult result = new Auditor().run(new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), margin / 100));
@@ -67,10 +81,10 @@ final class DemoCommand implements Callable<Integer> {
         return Main.DONE;
     }
 
-    private static String resource(String name) {
+    private static byte[] resource(String name) {
         try (InputStream in = DemoCommand.class.getResourceAsStream(name)) {
             if (in == null) throw new IllegalStateException("demo file " + name + " is missing from the jar");
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            return in.readAllBytes();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

@@ -30,6 +30,8 @@ import picocli.CommandLine.Model.CommandSpec;
             "  assay measure preds.csv --task classification --metric accuracy,macro_f1 --test-size 4000",
             "  assay measure preds.csv --task classification --metric roc_auc --interval delong --positive 1 --format json",
             "  assay measure preds.csv --task classification --metric top_k_accuracy:k=3 --interval wilson",
+            "  assay measure --task retrieval --scores sim.npy --group-size 5 --metric recall_at_k --k 1,5,10 --direction both",
+            "  assay measure --task retrieval --ranked runs.jsonl --relevance qrels.csv --metric mrr,ndcg_at_k:k=10",
             "",
             "Metric parameters follow a colon: NAME:key=value;key=value."})
 final class MeasureCommand implements Callable<Integer> {
@@ -47,6 +49,11 @@ final class MeasureCommand implements Callable<Integer> {
             description = "Metrics to compute, comma-separated (accuracy, error_rate, balanced_accuracy, precision, "
                     + "recall, f1, macro_f1, micro_f1, weighted_f1, mcc, cohen_kappa, roc_auc, top_k_accuracy:k=5, ...).")
     List<String> metrics;
+
+    @Option(names = "--k", paramLabel = "K", split = ",",
+            description = "Cut-offs for the metrics that take k (recall_at_k, ndcg_at_k, top_k_accuracy ...): "
+                    + "one result per K, for example --k 1,5,10.")
+    List<Integer> ks;
 
     @Option(names = "--test-size", paramLabel = "N",
             description = "Size of the full test set the file is a random subsample of (enables finite-population methods).")
@@ -68,17 +75,22 @@ final class MeasureCommand implements Callable<Integer> {
         if (testSize != null && testSize < 1) {
             throw UserInputException.usage("--test-size must be positive", "give the size of the full test set");
         }
-        List<Measurer.MetricRequest> requests = new ArrayList<>();
-        for (String m : metrics) requests.add(parseMetric(m));
+        List<Measurer.MetricRequest> requests = withCutoffs(metrics.stream().map(MeasureCommand::parseMetric).toList(), ks);
         Reproduction.Outputs outputs = inputs.reproduction(t, file).read();
         List<PartResult> results = new ArrayList<>();
         Measurer measurer = new Measurer(estimation.settings());
         for (Reproduction.Part part : outputs.parts()) {
-            results.add(new PartResult(part, measurer.measure(part.data(), requests, testSize)));
+            List<Measurer.MetricRequest> mine = requests.stream().filter(r -> serves(outputs, part, r.id())).toList();
+            if (!mine.isEmpty()) results.add(new PartResult(part, measurer.measure(part.data(), mine, testSize)));
+        }
+        if (results.isEmpty()) {
+            throw UserInputException.usage("none of the metrics can be computed from one direction",
+                    "rsum needs --direction both");
         }
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        outputs.parts().forEach(p -> p.data().warnings().forEach(w -> err.println("assay: " + w)));
+        outputs.parts().stream().flatMap(p -> p.data().warnings().stream()).distinct()
+                .forEach(w -> err.println("assay: " + w));
         out.print(format.equals("json") ? json(t, results) : text(results));
         out.flush();
         return Main.DONE;
@@ -86,6 +98,37 @@ final class MeasureCommand implements Callable<Integer> {
 
     /** The measurements of one part of the outputs (one retrieval direction, say). */
     record PartResult(Reproduction.Part part, List<Measurement> measurements) {}
+
+    /** A part serves the metrics it was made for (rsum over both directions), others serve the rest. */
+    private static boolean serves(Reproduction.Outputs outputs, Reproduction.Part part, String metric) {
+        if (part.metrics() != null) return part.metrics().contains(metric);
+        return outputs.parts().stream().noneMatch(p -> p.metrics() != null && p.metrics().contains(metric));
+    }
+
+    /** Each metric that takes k and was not given one, once per cut-off in {@code ks}. */
+    static List<Measurer.MetricRequest> withCutoffs(List<Measurer.MetricRequest> requests, List<Integer> ks) {
+        if (ks == null || ks.isEmpty()) return requests;
+        List<Measurer.MetricRequest> out = new ArrayList<>();
+        boolean used = false;
+        for (Measurer.MetricRequest r : requests) {
+            boolean takesK = org.assay.metrics.MetricRegistry.get(r.id()).params().contains("k");
+            if (!takesK || r.params().containsKey("k")) {
+                out.add(r);
+                continue;
+            }
+            used = true;
+            for (int k : ks) {
+                Map<String, String> p = new LinkedHashMap<>(r.params());
+                p.put("k", Integer.toString(k));
+                out.add(new Measurer.MetricRequest(r.id(), p));
+            }
+        }
+        if (!used) {
+            throw UserInputException.usage("--k was given but no requested metric takes a cut-off k",
+                    "use it with recall_at_k, ndcg_at_k, map_at_k, mrr, top_k_accuracy ...");
+        }
+        return out;
+    }
 
     static Measurer.MetricRequest parseMetric(String text) {
         String t = text.trim();
@@ -109,12 +152,18 @@ final class MeasureCommand implements Callable<Integer> {
             }
             sb.append(String.format(Locale.ROOT, fmt, "metric", "n", "value", "interval", "method"));
             for (Measurement m : part.measurements()) {
+                if (!m.computed()) {
+                    sb.append(String.format(Locale.ROOT, fmt, label(m), m.n(), "n/a", "n/a", "not computable"));
+                    continue;
+                }
                 sb.append(String.format(Locale.ROOT, fmt, label(m), m.n(), String.format(Locale.ROOT, "%.4f", m.value()),
                         String.format(Locale.ROOT, "[%.4f, %.4f]", m.interval().lower(), m.interval().upper()),
                         m.interval().method()));
             }
             part.measurements().stream().flatMap(m -> m.notes().stream()).distinct()
                     .forEach(n -> sb.append("note: ").append(n).append('\n'));
+            part.measurements().stream().filter(m -> !m.computed())
+                    .forEach(m -> sb.append("not computable: ").append(m.notComputable()).append('\n'));
         }
         return sb.toString();
     }
@@ -140,8 +189,8 @@ final class MeasureCommand implements Callable<Integer> {
         root.put("resamples", s.resamples());
         ArrayNode arr = root.putArray("metrics");
         ArrayNode w = mapper.createArrayNode();
+        parts.stream().flatMap(p -> p.part().data().warnings().stream()).distinct().forEach(w::add);
         for (PartResult part : parts) {
-            part.part().data().warnings().forEach(w::add);
             for (Measurement m : part.measurements()) {
                 ObjectNode o = arr.addObject();
                 o.put("metric", m.metric());
@@ -149,6 +198,12 @@ final class MeasureCommand implements Callable<Integer> {
                 ObjectNode p = o.putObject("params");
                 m.params().forEach(p::put);
                 o.put("n", m.n());
+                if (!m.computed()) {
+                    o.putNull("value");
+                    o.putNull("interval");
+                    o.put("not_computable", m.notComputable());
+                    continue;
+                }
                 o.put("value", m.value());
                 ObjectNode i = o.putObject("interval");
                 i.put("lower", m.interval().lower());

@@ -14,6 +14,8 @@ import picocli.CommandLine.Option;
 final class TaskInputs {
     @Mixin ColumnOptions columns;
 
+    @Mixin RetrievalOptions retrieval;
+
     @Option(names = "--target-column", paramLabel = "NAME", defaultValue = "target",
             description = "Regression: true-value column (default ${DEFAULT-VALUE}).")
     String target;
@@ -24,8 +26,15 @@ final class TaskInputs {
             case CLASSIFICATION -> new ClassificationReproduction(null, null, required(file, task), columns.readOptions());
             case REGRESSION -> new RegressionReproduction(null, null, required(file, task),
                     new RegressionColumns(columns.id, target, columns.prediction));
+            case RETRIEVAL -> {
+                if (file != null) {
+                    throw UserInputException.usage("retrieval reads --scores or --ranked, not a predictions file (" + file + ")",
+                            "give the score matrix with --scores FILE");
+                }
+                yield retrieval.reproduction();
+            }
             default -> throw UserInputException.usage("task '" + task.id() + "' is not supported yet",
-                    "use --task classification or regression");
+                    "use --task classification, retrieval or regression");
         };
     }
 

@@ -13,7 +13,7 @@ import java.util.List;
  * start with {@code #} are comments (the sampler records its seed and method there), kept as
  * written. Ids are taken exactly as written, without trimming, like ids in the predictions.
  */
-final class Manifest {
+public final class Manifest {
     private final IdRegistry ids;
     private final List<String> comments;
 
@@ -22,7 +22,8 @@ final class Manifest {
         this.comments = comments;
     }
 
-    static Manifest read(Path file) {
+    /** Reads and checks a manifest (distinct ids, at least one). */
+    public static Manifest read(Path file) {
         IdRegistry ids = new IdRegistry(file);
         List<String> comments = new ArrayList<>();
         boolean anyLine = false;
@@ -47,6 +48,9 @@ final class Manifest {
     }
 
     IdRegistry ids() { return ids; }
+
+    /** Number of ids listed. */
+    public int size() { return ids.size(); }
 
     /** The comment lines, with their leading '#'. */
     List<String> comments() { return comments; }

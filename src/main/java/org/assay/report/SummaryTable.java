@@ -18,9 +18,10 @@ public final class SummaryTable {
         for (Finding f : r.findings()) {
             Claim c = f.claim();
             String label = c.tableId() + ": " + c.label();
-            if (label.length() > 36) label = label.substring(0, 35) + "…";
+            // keep the end: the column path tells the claims of one row apart
+            if (label.length() > 36) label = "…" + label.substring(label.length() - 35);
             boolean ok = f.verdict() != Verdict.NOT_COMPUTABLE;
-            sb.append(String.format(Locale.ROOT, fmt, label, c.metric(), c.value().text(),
+            sb.append(String.format(Locale.ROOT, fmt, label, metric(c), c.value().text(),
                     ok ? Display.value(c, f.estimate()) : "n/a",
                     ok ? Display.range(c, f.interval().lower(), f.interval().upper()) : "n/a",
                     f.verdict().word()));
@@ -30,5 +31,13 @@ public final class SummaryTable {
         if (r.count(Verdict.NOT_COMPUTABLE) > 0) sb.append(", ").append(r.count(Verdict.NOT_COMPUTABLE)).append(" not computable");
         if (!r.unaudited().isEmpty()) sb.append(", ").append(r.unaudited().size()).append(" not audited");
         return sb.append('\n').toString();
+    }
+
+    /** The metric id with its parameters (recall_at_k:k=5), as --metric takes it. */
+    private static String metric(Claim c) {
+        if (c.params().isEmpty()) return c.metric();
+        StringBuilder sb = new StringBuilder(c.metric()).append(':');
+        c.params().forEach((k, v) -> sb.append(k).append('=').append(v).append(';'));
+        return sb.substring(0, sb.length() - 1);
     }
 }

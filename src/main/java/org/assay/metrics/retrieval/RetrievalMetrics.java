@@ -56,7 +56,7 @@ public final class RetrievalMetrics {
         DEFINITIONS.put("median_rank", "median rank of the first relevant candidate (even count: mean of the two middle ranks)");
         DEFINITIONS.put("ndcg_at_k", "normalised DCG at k with binary gains and log2 discount, averaged over queries");
         DEFINITIONS.put("map_at_k", "mean average precision at k, each query's AP divided by min(R, k)");
-        DEFINITIONS.put("rsum", "R@1 + R@5 + R@10 in both directions, in percent points (0 to 600)");
+        DEFINITIONS.put("rsum", "R@1 + R@5 + R@10 in both directions (0 to 6 as fractions; tables print it in percent points, 0 to 600)");
     }
 
     private static final Map<String, String[]> TITLES_AND_REFERENCES = Map.of(
@@ -198,14 +198,14 @@ public final class RetrievalMetrics {
     }
 
     /**
-     * R@1 + R@5 + R@10 of direction {@code a} plus the same of direction {@code b}, times 100
-     * (percent points, 0 to 600), as retrieval tables print "rsum".
+     * R@1 + R@5 + R@10 of direction {@code a} plus the same of direction {@code b},
+     * on the fraction scale (0 to 6; a table's "425.7" is 4.257 with scale percent), like every value assay computes.
      *
-     * <p>Resampling: the units are a's queries followed by b's queries (weights in that order).
-     * Each direction's recalls are weighted means over its own queries, so resampling each
-     * direction independently (weights summing to each direction's query count) gives the sum
-     * of two independent bootstraps; the two query sets are treated as independent samples. When
-     * they are linked (captions of the same images), the interval ignores that dependence.
+     * <p>Resampling: the units are a's queries followed by b's queries (weights in that order),
+     * resampled together. Each direction's recalls are weighted means over its own queries, so a
+     * resample's value is a ratio per direction; to first order this matches resampling each
+     * direction on its own. The two query sets are treated as independent samples: when they are
+     * linked (captions of the same images), the interval ignores that dependence.
      */
     public static RetrievalMeasure rsum(RetrievalData a, RetrievalData b) {
         for (RetrievalData d : List.of(a, b)) {
@@ -229,7 +229,7 @@ public final class RetrievalMetrics {
         };
         SumStatistic s = new SumStatistic(table, sums -> {
             if (sums[3] == 0 || sums[7] == 0) return Double.NaN;
-            return 100 * ((sums[0] + sums[1] + sums[2]) / sums[3] + (sums[4] + sums[5] + sums[6]) / sums[7]);
+            return ((sums[0] + sums[1] + sums[2]) / sums[3] + (sums[4] + sums[5] + sums[6]) / sums[7]);
         });
         return new RetrievalMeasure(s, null, null);
     }
@@ -247,7 +247,7 @@ public final class RetrievalMetrics {
                 ? "there are only " + data.candidates() + " candidates"
                 : "the ranking is real only to depth " + data.depth() + " (query '" + data.queryIds().get(q)
                         + "' has " + data.depth() + " scored candidates" + (data.sentinel() != null
-                        ? ", the rest hold the sentinel " + data.sentinel() : "") + ")";
+                        ? ", the rest hold the sentinel " + plain(data.sentinel()) : "") + ")";
         return id + " at k = " + k + " is not computable: " + where;
     }
 
@@ -289,6 +289,10 @@ public final class RetrievalMetrics {
         int c = 0;
         while (c < sortedRanks.length && sortedRanks[c] <= limit) c++;
         return c;
+    }
+
+    private static String plain(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
     }
 
     private static double log2(double x) { return Math.log(x) / Math.log(2); }
