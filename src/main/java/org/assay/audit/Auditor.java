@@ -82,6 +82,13 @@ public final class Auditor {
                         // a generation score means little without the settings it was computed with
                         tableNotes = new ArrayList<>(tableNotes);
                         tableNotes.add("computed with " + settingsOf.get(key));
+                        List<String> missing = org.assay.audit.checks.ConfigurationRule.missingSettings(c);
+                        if (!missing.isEmpty()) {
+                            tableNotes.add("the claim does not state its " + String.join(", ", missing)
+                                    + " setting" + (missing.size() > 1 ? "s" : "") + ", so the defaults were used; "
+                                    + c.metric() + " moves with these settings by more than a printed decimal, so "
+                                    + "agreement or a difference of about a point says little until they are known");
+                        }
                     }
                 } catch (UserInputException e) {
                     findings.add(Finding.notComputable(c, ci[0], ci[1], e.problem()));

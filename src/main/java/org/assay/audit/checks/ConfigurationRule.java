@@ -13,7 +13,7 @@ import org.assay.claims.ClaimTable;
  * BLEU Scores", WMT). A claim that does not state them in its params cannot be audited to a
  * fraction of a point, and this rule says so.
  */
-final class ConfigurationRule implements CheckRule {
+public final class ConfigurationRule implements CheckRule {
     static final String NAME = "configuration";
 
     /** The params each generation metric's value depends on, in the order they are asked for. */
@@ -29,14 +29,20 @@ final class ConfigurationRule implements CheckRule {
 
     @Override public String name() { return NAME; }
 
+    /** The settings a claim's metric depends on that the claim does not state (empty when none are missing). */
+    public static List<String> missingSettings(Claim c) {
+        List<String> needed = REQUIRED.get(c.metric());
+        if (needed == null) return List.of();
+        return needed.stream().filter(k -> !c.params().containsKey(k)).toList();
+    }
+
     @Override
     public List<CheckFinding> check(ClaimTable table, Tally tally) {
         List<CheckFinding> out = new ArrayList<>();
         for (Claim c : table.claims()) {
-            List<String> needed = REQUIRED.get(c.metric());
-            if (needed == null) continue;
+            if (!REQUIRED.containsKey(c.metric())) continue;
             tally.ran(NAME);
-            List<String> missing = needed.stream().filter(k -> !c.params().containsKey(k)).toList();
+            List<String> missing = missingSettings(c);
             if (missing.isEmpty()) continue;
             out.add(CheckFinding.of(NAME, CheckKind.QUESTIONABLE, table.id(), List.of(c),
                     Claims.quote(c) + " does not say its " + String.join(", ", missing) + " setting"
