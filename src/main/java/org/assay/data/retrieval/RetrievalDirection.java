@@ -25,10 +25,7 @@ public record RetrievalDirection(Path source, RetrievalData ranks, List<String> 
         return ranks.direction() + ": " + ranks.queries() + " queries × " + ranks.candidates() + " candidates, "
                 + ranks.ties().name().toLowerCase(java.util.Locale.ROOT) + " ties"
                 + (ranks.depth() < ranks.candidates() ? ", ranked only to depth " + ranks.depth()
-                        + (ranks.sentinel() == null ? "" : " (sentinel " + plain(ranks.sentinel()) + " below it)") : "");
+                        + (ranks.sentinel() == null ? "" : " (sentinel " + SentinelRule.plain(ranks.sentinel()) + " below it)") : "");
     }
 
-    private static String plain(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
-    }
 }

@@ -73,7 +73,7 @@ public record RetrievalInput(String label, Path scores, MatrixRanking.Side side,
         RetrievalData data = MatrixRanking.rank(matrix, side, rowIds, columnIds, rel, ties, sentinel, label);
         List<String> warnings = new ArrayList<>();
         if (data.sentinel() != null && sentinel.kind() == SentinelRule.Kind.DETECT) {
-            warnings.add(scores + ": the value " + plain(data.sentinel()) + " repeats at the bottom of the rankings, so it is"
+            warnings.add(scores + ": the value " + SentinelRule.plain(data.sentinel()) + " repeats at the bottom of the rankings, so it is"
                     + " read as 'not scored': " + label + " is ranked only to depth " + data.depth()
                     + " (give the sentinel explicitly, or 'none' if it is a real score)");
         }
@@ -98,7 +98,4 @@ public record RetrievalInput(String label, Path scores, MatrixRanking.Side side,
         return name.endsWith(".npy") ? NpyScoreMatrix.open(file) : CsvScoreMatrix.open(file);
     }
 
-    private static String plain(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
-    }
 }

@@ -29,4 +29,9 @@ public record SentinelRule(Kind kind, double given) {
         if (Double.isNaN(v)) throw org.assay.common.UserInputException.usage("the sentinel value cannot be NaN", "give a number");
         return new SentinelRule(Kind.VALUE, v);
     }
+
+    /** A score as a user would type it: -100 rather than -100.0. */
+    public static String plain(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+    }
 }

@@ -247,7 +247,7 @@ public final class RetrievalMetrics {
                 ? "there are only " + data.candidates() + " candidates"
                 : "the ranking is real only to depth " + data.depth() + " (query '" + data.queryIds().get(q)
                         + "' has " + data.depth() + " scored candidates" + (data.sentinel() != null
-                        ? ", the rest hold the sentinel " + plain(data.sentinel()) : "") + ")";
+                        ? ", the rest hold the sentinel " + org.assay.data.retrieval.SentinelRule.plain(data.sentinel()) : "") + ")";
         return id + " at k = " + k + " is not computable: " + where;
     }
 
@@ -291,9 +291,6 @@ public final class RetrievalMetrics {
         return c;
     }
 
-    private static String plain(double v) {
-        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
-    }
 
     private static double log2(double x) { return Math.log(x) / Math.log(2); }
 }
