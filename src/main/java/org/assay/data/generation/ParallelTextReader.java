@@ -30,7 +30,7 @@ final class ParallelTextReader {
             if (lines.size() != hypotheses.size()) {
                 throw new UserInputException(file, null, "the reference file has " + lines.size()
                         + " lines but the hypotheses file " + hypothesesFile + " has " + hypotheses.size(),
-                        "give every file one line per item, in the same order (an empty line where a set has no reference)");
+                        "give every file one line per item, in the same order; leave a line empty where a reference set has none");
             }
             sets.add(lines);
         }
