@@ -1,5 +1,6 @@
 package org.assay.metrics.generation;
 
+import java.util.Arrays;
 import org.assay.metrics.UnitTable;
 
 /**
@@ -21,7 +22,7 @@ final class CountTable implements UnitTable {
     @Override public int width() { return width; }
 
     /** Item i's statistics (a copy). */
-    int[] row(int i) { return java.util.Arrays.copyOfRange(counts, i * width, (i + 1) * width); }
+    int[] row(int i) { return Arrays.copyOfRange(counts, i * width, (i + 1) * width); }
 
     @Override
     public void addUnit(int i, double weight, double[] sums) {

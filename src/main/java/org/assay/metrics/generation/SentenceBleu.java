@@ -1,5 +1,6 @@
 package org.assay.metrics.generation;
 
+import java.util.Arrays;
 import java.util.Map;
 import org.assay.data.generation.GenerationData;
 import org.assay.metrics.MetricKind;
@@ -27,7 +28,7 @@ final class SentenceBleu implements GenerationMetric {
         double[] perItem = new double[counts.units()];
         double[] row = new double[counts.width()];
         for (int i = 0; i < perItem.length; i++) {
-            java.util.Arrays.fill(row, 0);
+            Arrays.fill(row, 0);
             counts.addUnit(i, 1, row);
             perItem[i] = score.value(row);
         }
