@@ -1,0 +1,53 @@
+package org.assay.data.generation;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.assay.common.UserInputException;
+import org.assay.data.TextFiles;
+
+/**
+ * The lines of a UTF-8 text file. A line ends at LF; a CR right before the LF is dropped, so CRLF
+ * files read like LF files; a final line ending does not start an extra empty line.
+ *
+ * <p>Written by hand rather than with {@link BufferedReader#readLine}, which also ends a line at a
+ * lone CR: in parallel files one stray CR would then shift every later hypothesis against its
+ * references. Here a CR not followed by LF is an error naming its line.
+ */
+final class TextLines {
+    private TextLines() {}
+
+    static List<String> read(Path file, String what) {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        boolean carriageReturn = false;
+        try (Reader in = new BufferedReader(TextFiles.openUtf8(file, what))) {
+            int c;
+            while ((c = in.read()) != -1) {
+                if (carriageReturn && c != '\n') throw loneCarriageReturn(file, lines.size() + 1);
+                carriageReturn = c == '\r';
+                if (c == '\r') continue;
+                if (c == '\n') {
+                    lines.add(line.toString());
+                    line.setLength(0);
+                } else {
+                    line.append((char) c);
+                }
+            }
+        } catch (IOException e) {
+            throw new UserInputException(file, null, "cannot read the " + what + ": " + e.getMessage(),
+                    "check that the file exists and is readable", e);
+        }
+        if (carriageReturn) throw loneCarriageReturn(file, lines.size() + 1);
+        if (line.length() > 0) lines.add(line.toString());
+        return lines;
+    }
+
+    private static UserInputException loneCarriageReturn(Path file, int line) {
+        return new UserInputException(file, "line " + line, "a carriage return (CR) not followed by a line feed",
+                "save the file with LF or CRLF line endings; a lone CR would split a line in two");
+    }
+}
