@@ -39,6 +39,10 @@ import org.assay.metrics.Task;
  *     task: regression               # classification (default), retrieval or regression
  *     predictions: counts.csv
  *     columns: {id: image, target: true_count, prediction: predicted_count}
+ *   - table: T3
+ *     task: generation
+ *     predictions: outputs.jsonl     # {"id", "hypothesis", "references": [...]} per line,
+ *                                    # or a hypotheses file with references: [ref1.txt, ref2.txt]
  *   - table: T1
  *     task: retrieval
  *     ties: pessimistic              # optimistic | pessimistic (default) | average
@@ -54,6 +58,7 @@ public final class AuditFileReader {
     private static final Set<String> TOP = Set.of("claims", "margin", "reproductions");
     private static final Set<String> REPRO = Set.of("table", "row", "task", "predictions", "manifest", "truth", "positive",
             "columns");
+    private static final Set<String> GENERATION = Set.of("table", "row", "task", "predictions", "references", "manifest");
     private static final Set<String> RETRIEVAL = Set.of("table", "row", "task", "ties", "directions", "manifest");
     private static final Set<String> DIRECTION = Set.of("column", "scores", "ranked", "side", "relevance", "group_size",
             "sentinel");
@@ -108,6 +113,10 @@ public final class AuditFileReader {
                 out.add(retrieval(file, base, r, at));
                 continue;
             }
+            if (task == Task.GENERATION) {
+                out.add(generation(file, base, r, at));
+                continue;
+            }
             checkFields(file, r, REPRO, at);
             Path predictions = path(file, base, r, "predictions", at);
             if (predictions == null) throw new UserInputException(file, at, "missing 'predictions:'", "name the predictions file");
@@ -117,7 +126,7 @@ public final class AuditFileReader {
             }
             if (task != Task.CLASSIFICATION) {
                 throw new UserInputException(file, at + "/task", "task '" + task.id() + "' cannot be audited yet",
-                        "use classification, retrieval or regression");
+                        "use classification, retrieval, generation or regression");
             }
             ReadOptions o = ReadOptions.defaults();
             JsonNode cols = r.get("columns");
@@ -161,6 +170,38 @@ public final class AuditFileReader {
         }
         return new RegressionReproduction(text(r, "table", null), text(r, "row", null), predictions,
                 new RegressionColumns(id, target, prediction));
+    }
+
+    /** A generation row: a JSON Lines file with references, or a hypotheses file and reference files. */
+    private static Reproduction generation(Path file, Path base, JsonNode r, String at) {
+        checkFields(file, r, GENERATION, at);
+        Path outputs = path(file, base, r, "predictions", at);
+        if (outputs == null) {
+            throw new UserInputException(file, at, "missing 'predictions:'",
+                    "name the outputs: a .jsonl file with id, hypothesis and references, or a hypotheses file");
+        }
+        List<Path> references = new ArrayList<>();
+        JsonNode refs = r.get("references");
+        if (refs != null) {
+            if (!refs.isArray()) {
+                throw new UserInputException(file, at + "/references", "references must be a list of files",
+                        "for example references: [ref-a.txt, ref-b.txt]");
+            }
+            for (int i = 0; i < refs.size(); i++) {
+                Path p = base.resolve(refs.get(i).asText()).normalize();
+                if (!Files.isRegularFile(p)) {
+                    throw new UserInputException(file, at + "/references/" + i, "file not found: " + p,
+                            "check the path (relative to the audit file)");
+                }
+                references.add(p);
+            }
+        }
+        try {
+            return new GenerationReproduction(text(r, "table", null), text(r, "row", null), outputs, references,
+                    path(file, base, r, "manifest", at));
+        } catch (UserInputException e) {
+            throw new UserInputException(file, at, e.problem(), e.fix());
+        }
     }
 
     /** A retrieval row: one or two directions, each a score matrix or ranked lists with its relevance. */

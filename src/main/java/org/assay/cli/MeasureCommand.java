@@ -32,13 +32,16 @@ import picocli.CommandLine.Model.CommandSpec;
             "  assay measure preds.csv --task classification --metric top_k_accuracy:k=3 --interval wilson",
             "  assay measure --task retrieval --scores sim.npy --group-size 5 --metric recall_at_k --k 1,5,10 --direction both",
             "  assay measure --task retrieval --ranked runs.jsonl --relevance qrels.csv --metric mrr,ndcg_at_k:k=10",
+            "  assay measure outputs.jsonl --task generation --metric bleu,chrf,rouge_l",
+            "  assay measure hyp.txt --references ref1.txt,ref2.txt --task generation --metric \"bleu:tokenize=13a;lowercase=false\"",
             "",
             "Metric parameters follow a colon: NAME:key=value;key=value."})
 final class MeasureCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
     @Parameters(paramLabel = "FILE", arity = "0..1",
-            description = "Predictions file (CSV, TSV or JSONL); retrieval reads --scores or --ranked instead.")
+            description = "Predictions file (CSV, TSV or JSONL); for generation a .jsonl of items with references, or a "
+                    + "hypotheses file with --references; retrieval reads --scores or --ranked instead.")
     Path file;
 
     @Option(names = "--task", paramLabel = "TASK", defaultValue = "classification",
@@ -160,8 +163,14 @@ final class MeasureCommand implements Callable<Integer> {
                         String.format(Locale.ROOT, "[%.4f, %.4f]", m.interval().lower(), m.interval().upper()),
                         m.interval().method()));
             }
-            part.measurements().stream().flatMap(m -> m.notes().stream()).distinct()
-                    .forEach(n -> sb.append("note: ").append(n).append('\n'));
+            // notes every metric shares (the method) once; a metric's own (its settings) under its name
+            List<Measurement> ms = part.measurements();
+            List<String> shared = ms.get(0).notes().stream().filter(n -> ms.stream().allMatch(m -> m.notes().contains(n))).toList();
+            shared.forEach(n -> sb.append("note: ").append(n).append('\n'));
+            for (Measurement m : ms) {
+                m.notes().stream().filter(n -> !shared.contains(n))
+                        .forEach(n -> sb.append("note (").append(label(m)).append("): ").append(n).append('\n'));
+            }
             part.measurements().stream().filter(m -> !m.computed())
                     .forEach(m -> sb.append("not computable: ").append(m.notComputable()).append('\n'));
         }

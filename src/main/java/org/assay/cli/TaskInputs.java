@@ -1,7 +1,9 @@
 package org.assay.cli;
 
 import java.nio.file.Path;
+import java.util.List;
 import org.assay.audit.ClassificationReproduction;
+import org.assay.audit.GenerationReproduction;
 import org.assay.audit.RegressionReproduction;
 import org.assay.audit.Reproduction;
 import org.assay.common.UserInputException;
@@ -15,6 +17,11 @@ final class TaskInputs {
     @Mixin ColumnOptions columns;
 
     @Mixin RetrievalOptions retrieval;
+
+    @Option(names = "--references", paramLabel = "FILE", split = ",",
+            description = "Generation: reference files, one per reference set, aligned line by line with a "
+                    + "plain-text hypotheses FILE (not needed for a .jsonl FILE, which holds its references).")
+    List<Path> references;
 
     @Option(names = "--target-column", paramLabel = "NAME", defaultValue = "target",
             description = "Regression: true-value column (default ${DEFAULT-VALUE}).")
@@ -33,8 +40,8 @@ final class TaskInputs {
                 }
                 yield retrieval.reproduction();
             }
-            default -> throw UserInputException.usage("task '" + task.id() + "' is not supported yet",
-                    "use --task classification, retrieval or regression");
+            case GENERATION -> new GenerationReproduction(null, null, required(file, task),
+                    references == null ? List.of() : references, columns.manifest);
         };
     }
 

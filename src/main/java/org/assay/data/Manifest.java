@@ -56,6 +56,16 @@ public final class Manifest {
     List<String> comments() { return comments; }
 
     /**
+     * The ids of another task's outputs (generation items, say) against the manifest, as
+     * {@link #checkCovers(IdRegistry)} does for predictions; {@code ids.get(i)} is item i, reported as line i + 1.
+     */
+    public void checkCovers(Path outputs, java.util.List<String> itemIds) {
+        IdRegistry registry = new IdRegistry(outputs);
+        for (int i = 0; i < itemIds.size(); i++) registry.add(itemIds.get(i), i + 1);
+        checkCovers(registry);
+    }
+
+    /**
      * Every prediction id must be in the manifest and every manifest id must have a prediction;
      * the error names the first offender and counts the rest.
      */
