@@ -22,7 +22,7 @@ public final class GenerationMetrics {
 
     /** Every generation metric, in the order reports list them. */
     private static final List<GenerationMetric> METRICS = List.of(
-            new RougeN(1), new RougeN(2), new RougeL()
+            new RougeN(1), new RougeN(2), new RougeL(), new Meteor()
     );
 
     public static List<Info> all() { return METRICS.stream().map(GenerationMetric::info).toList(); }
