@@ -304,6 +304,10 @@ def wordnet_words(wn, items, rng):
 
 
 def main():
+    for needed in (WORDNET_DIR, LEXNAMES_MAN):
+        if not os.path.exists(needed):
+            # reported like a missing Python module, so regenerate.sh skips this script
+            raise ImportError(f"{needed} is missing: install Debian's wordnet-base and wordnet packages")
     rng = random.Random(SEED)
     items = corpus(rng, 80) + SPECIAL_ITEMS
     with tempfile.TemporaryDirectory() as tmp:
