@@ -15,7 +15,8 @@ import org.assay.metrics.UnitMean;
  * hypothesis of t words and a reference of r words: P = m / t, R = m / r,
  * F_mean = P R / (alpha P + (1 - alpha) R), penalty = gamma (chunks / m)^beta, and the score is
  * F_mean (1 - penalty); 0 when nothing matches or a text is empty. The defaults alpha = 0.9,
- * beta = 3, gamma = 0.5 are the commonly used ones (NLTK's defaults; Lavie & Agarwal 2007).
+ * beta = 3, gamma = 0.5 are Banerjee & Lavie's F_mean = 10PR / (R + 9P) and penalty
+ * 0.5 (chunks / matches)^3 (from memory), and NLTK's defaults: the commonly used values.
  *
  * <p>Tokens: the text is lower-cased and split by {@code tokenize} (default none: on whitespace,
  * punctuation staying attached). An item with several references scores the maximum over them (as

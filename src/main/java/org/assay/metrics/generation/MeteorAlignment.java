@@ -9,8 +9,9 @@ import java.util.function.UnaryOperator;
 /**
  * METEOR's word alignment and fragmentation count as NLTK 3.8 computes them
  * ({@code nltk.translate.meteor_score._enum_align_words} and {@code _count_chunks}). This is NLTK's
- * greedy alignment, not the minimum-crossing search of the original METEOR (Banerjee & Lavie 2005,
- * §2): three stages run one after the other on the words the earlier stages left unmatched,
+ * greedy alignment, not the original METEOR's search for the alignment with the fewest crossings
+ * (Banerjee & Lavie 2005): three stages run one after the other on the words the earlier stages
+ * left unmatched,
  * <ol>
  *   <li>exact: equal lower-cased words;</li>
  *   <li>stem: equal Porter stems; the words left over stay stemmed for the next stage;</li>

@@ -11,7 +11,8 @@ import org.assay.metrics.UnitMean;
  * ROUGE-N (Lin 2004, "ROUGE: A Package for Automatic Evaluation of Summaries", §2): the n-grams a
  * hypothesis shares with a reference, each counted at most as often as it occurs in both (clipped
  * counts), over the reference's n-grams (recall), the hypothesis's n-grams (precision), or their
- * F-measure ({@link RougeMeasure}). An item with several references scores the maximum over them;
+ * F-measure ({@link RougeMeasure}). Lin's formula is the recall; reporting the F-measure by default
+ * follows common practice. An item with several references scores the maximum over them;
  * the corpus value is the mean of the item scores. Tokens as in {@link RougeSettings}.
  */
 final class RougeN implements GenerationMetric {
