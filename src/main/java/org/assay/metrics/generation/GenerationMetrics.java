@@ -22,7 +22,8 @@ public final class GenerationMetrics {
 
     /** Every generation metric, in the order reports list them. */
     private static final List<GenerationMetric> METRICS = List.of(
-            new Bleu(), new SentenceBleu(), new Chrf(), new ExactMatch(), new TokenF1()
+            new Bleu(), new SentenceBleu(), new Chrf(), new RougeN(1), new RougeN(2), new RougeL(), new Meteor(),
+            new ExactMatch(), new TokenF1()
     );
 
     public static List<Info> all() { return METRICS.stream().map(GenerationMetric::info).toList(); }
