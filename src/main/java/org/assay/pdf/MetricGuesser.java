@@ -201,8 +201,9 @@ public final class MetricGuesser {
         Map<String, String> params = new LinkedHashMap<>();
         String k = group(m, "k"), n = group(m, "n");
         if (k != null) params.put("k", String.valueOf(Integer.parseInt(k)));
-        if (n != null) params.put("n", n);
+        if (n != null) params.put("order", n);                 // BLEU-2: bleu with order 2
         String metric = r.metric();
+        if (metric.equals("chrf") && key.contains("++")) params.put("word_order", "2");   // chrF++ adds word bigrams
         if (metric.equals("top_k_accuracy") && "1".equals(params.get("k"))) { // top-1 accuracy is accuracy
             metric = "accuracy";
             params.clear();

@@ -100,11 +100,11 @@ class MetricGuesserTest {
             BLEU;null;bleu;
             BLEU-4;null;bleu;
             B@4;null;bleu;
-            BLEU-1;null;bleu;n=1
-            B@2;null;bleu;n=2
+            BLEU-1;null;bleu;order=1
+            B@2;null;bleu;order=2
             sacreBLEU;null;bleu;
             chrF;null;chrf;
-            chrF++;null;chrf;
+            chrF++;null;chrf;word_order=2
             ROUGE-1;null;rouge_1;
             ROUGE-2;null;rouge_2;
             ROUGE-L;null;rouge_l;
