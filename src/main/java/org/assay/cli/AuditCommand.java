@@ -9,8 +9,8 @@ import org.assay.audit.AuditFileReader;
 import org.assay.audit.AuditRequest;
 import org.assay.audit.AuditResult;
 import org.assay.audit.Auditor;
-import org.assay.audit.ClassificationReproduction;
 import org.assay.audit.Reproduction;
+import org.assay.metrics.Task;
 import org.assay.common.UserInputException;
 import org.assay.report.JsonReport;
 import org.assay.report.MarkdownReport;
@@ -34,6 +34,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "  assay audit --claims claims.yaml --predictions preds.csv --manifest subsample.txt \\",
             "      --table T2 --row \"ChirpNet (ours)\" --positive 1 --out audit-report",
             "  assay audit examples/birdcalls/audit.yaml --out audit-report --fail-on discrepant",
+            "  assay audit --claims claims.yaml --task generation --predictions outputs.jsonl --table T3 --row Ours",
             "",
             "An audit file names the claims file and, per reproduced table row, the predictions:",
             "  claims: claims.yaml",
@@ -50,8 +51,14 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--claims", paramLabel = "FILE", description = "Claims file (YAML, JSON or CSV).")
     Path claims;
 
-    @Option(names = "--predictions", paramLabel = "FILE", description = "Predictions file (CSV, TSV or JSONL).")
+    @Option(names = "--predictions", paramLabel = "FILE",
+            description = "Predictions file (CSV, TSV or JSONL); generation: outputs .jsonl or a hypotheses file "
+                    + "with --references; retrieval: none, give --scores or --ranked.")
     Path predictions;
+
+    @Option(names = "--task", paramLabel = "TASK", defaultValue = "classification",
+            description = "Task of the outputs: classification (default), retrieval, generation or regression.")
+    String task;
 
     @Option(names = "--table", paramLabel = "ID", description = "Claims table the predictions reproduce (needed when there are several).")
     String table;
@@ -59,7 +66,7 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--row", paramLabel = "LABEL", description = "Row of the reproduced method (needed when the table has several).")
     String row;
 
-    @Mixin ColumnOptions columns;
+    @Mixin TaskInputs inputs;
 
     @Option(names = "--margin", paramLabel = "POINTS", description = "Equivalence margin in percentage points (default 1).")
     Double margin;
@@ -103,11 +110,16 @@ final class AuditCommand implements Callable<Integer> {
             double m = margin != null ? margin : f.marginPoints() != null ? f.marginPoints() : 1.0;
             return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100);
         }
-        if (claims == null || predictions == null) {
+        Task t = Task.parse(task);
+        if (claims == null || (predictions == null && t != Task.RETRIEVAL)) {
             throw UserInputException.usage("audit needs --claims FILE and --predictions FILE (or an audit file)",
                     "see 'assay audit --help'");
         }
-        Reproduction r = new ClassificationReproduction(table, row, predictions, columns.readOptions());
+        if (inputs.needsColumnPrefixes(t)) {
+            throw UserInputException.usage("with --direction both, assay cannot tell which claims each direction serves",
+                    "audit one direction at a time, or write an audit file with a 'column:' per direction");
+        }
+        Reproduction r = inputs.reproduction(t, predictions, table, row);
         return new AuditRequest(claims, List.of(r), estimation.settings(), (margin == null ? 1.0 : margin) / 100);
     }
 }

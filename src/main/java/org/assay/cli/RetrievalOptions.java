@@ -49,8 +49,10 @@ final class RetrievalOptions {
             description = "Retrieval: the score that fills unscored candidates: auto (a repeated minimum, default), none, or a value such as -100.")
     String sentinel;
 
-    /** The outputs as one reproduction with no table or row: one direction, or both and their sum. */
-    Reproduction reproduction() {
+    boolean bothDirections() { return direction.strip().equalsIgnoreCase("both"); }
+
+    /** The outputs as one reproduction: one direction, or both and their sum. */
+    Reproduction reproduction(String table, String row, Path manifest) {
         TiePolicy policy = TiePolicy.parse(ties);
         SentinelRule rule = AuditFileReader.sentinel(null, "--sentinel", sentinel);
         String side = direction.strip().toLowerCase(Locale.ROOT);
@@ -73,6 +75,6 @@ final class RetrievalOptions {
             inputs.add(new RetrievalInput("columns", scores, MatrixRanking.Side.COLUMNS, null, rel,
                     columnRelevance == null && relevance != null, groupSize, policy, rule));
         }
-        return new RetrievalReproduction(null, null, inputs, inputs.size() == 2, null);
+        return new RetrievalReproduction(table, row, inputs, inputs.size() == 2, manifest);
     }
 }

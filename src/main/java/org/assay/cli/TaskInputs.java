@@ -29,20 +29,30 @@ final class TaskInputs {
 
     /** The outputs to read for a task, as one reproduction with no table or row. */
     Reproduction reproduction(Task task, Path file) {
+        return reproduction(task, file, null, null);
+    }
+
+    /** The outputs to read for a task, reproducing {@code row} of claims table {@code table} (null: the only one). */
+    Reproduction reproduction(Task task, Path file, String table, String row) {
         return switch (task) {
-            case CLASSIFICATION -> new ClassificationReproduction(null, null, required(file, task), columns.readOptions());
-            case REGRESSION -> new RegressionReproduction(null, null, required(file, task),
+            case CLASSIFICATION -> new ClassificationReproduction(table, row, required(file, task), columns.readOptions());
+            case REGRESSION -> new RegressionReproduction(table, row, required(file, task),
                     new RegressionColumns(columns.id, target, columns.prediction));
             case RETRIEVAL -> {
                 if (file != null) {
                     throw UserInputException.usage("retrieval reads --scores or --ranked, not a predictions file (" + file + ")",
                             "give the score matrix with --scores FILE");
                 }
-                yield retrieval.reproduction();
+                yield retrieval.reproduction(table, row, columns.manifest);
             }
-            case GENERATION -> new GenerationReproduction(null, null, required(file, task),
+            case GENERATION -> new GenerationReproduction(table, row, required(file, task),
                     references == null ? List.of() : references, columns.manifest);
         };
+    }
+
+    /** Whether the reproduction has parts that serve only the claims under a column prefix (two directions). */
+    boolean needsColumnPrefixes(Task task) {
+        return task == Task.RETRIEVAL && retrieval.bothDirections();
     }
 
     private static Path required(Path file, Task task) {

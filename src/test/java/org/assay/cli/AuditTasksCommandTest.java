@@ -158,4 +158,30 @@ class AuditTasksCommandTest {
         assertThat(run.err()).contains("audit.yaml").contains("/reproductions/0/directions/0/column").contains("needs 'column:'");
         assertThat(tmp.resolve("r")).doesNotExist();
     }
+
+    @Test
+    void theAuditCommandTakesRetrievalOutputsThroughTaskWithoutAnAuditFile() throws Exception {
+        // retrieval.json, case groups_sentinel, rows direction: R@5 from retrieval_reference.py
+        JsonNode c = org.assay.data.retrieval.RetrievalFixtures.cases().get(0);
+        double r5 = c.get("directions").get("rows").get("policies").get("PESSIMISTIC").get("expected")
+                .get("recall_at_k:k=5").asDouble();
+        Files.writeString(tmp.resolve("claims.yaml"), String.format(Locale.ROOT, """
+                tables:
+                  - id: T1
+                    claims:
+                      - {row: Ours, column: [R@5], metric: recall_at_k, params: {k: 5}, value: "%.1f", scale: percent}
+                      - {row: Ours, column: [R@50], metric: recall_at_k, params: {k: 50}, value: "99.0", scale: percent}
+                """, 100 * r5));
+        Path scores = org.assay.data.retrieval.RetrievalFixtures.fixture("groups_sentinel.npy");
+        CliRun run = CliRun.of("audit", "--claims", tmp.resolve("claims.yaml").toString(), "--task", "retrieval",
+                "--scores", scores.toString(), "--group-size", "5", "--out", tmp.resolve("r").toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode findings = new ObjectMapper().readTree(tmp.resolve("r/report.json").toFile()).get("findings");
+        assertThat(findings.get(0).get("estimate").asDouble()).isCloseTo(r5, within(1e-12));
+        assertThat(findings.get(1).get("verdict").asText()).isEqualTo("not computable");   // depth 40
+        CliRun both = CliRun.of("audit", "--claims", tmp.resolve("claims.yaml").toString(), "--task", "retrieval",
+                "--scores", scores.toString(), "--group-size", "5", "--direction", "both", "--out", tmp.resolve("b").toString());
+        assertThat(both.exitCode()).isEqualTo(2);
+        assertThat(both.err()).contains("audit file").contains("column:");
+    }
 }
