@@ -55,18 +55,24 @@ import org.assay.metrics.Task;
  *         sentinel: -100             # auto (default), none, or the value</pre>
  */
 public final class AuditFileReader {
-    private static final Set<String> TOP = Set.of("claims", "margin", "reproductions");
+    private static final Set<String> TOP = Set.of("claims", "margin", "reproductions", "templates");
     private static final Set<String> REPRO = Set.of("table", "row", "task", "predictions", "manifest", "truth", "positive",
-            "columns");
-    private static final Set<String> GENERATION = Set.of("table", "row", "task", "predictions", "references", "manifest");
-    private static final Set<String> RETRIEVAL = Set.of("table", "row", "task", "ties", "directions", "manifest");
+            "columns", "notes", "claim_notes");
+    private static final Set<String> GENERATION = Set.of("table", "row", "task", "predictions", "references", "manifest",
+            "notes", "claim_notes");
+    private static final Set<String> RETRIEVAL = Set.of("table", "row", "task", "ties", "directions", "manifest",
+            "notes", "claim_notes");
     private static final Set<String> DIRECTION = Set.of("column", "scores", "ranked", "side", "relevance", "group_size",
             "sentinel");
     private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
     private static final Set<String> REGRESSION_COLUMNS = Set.of("id", "target", "prediction");
 
-    /** The parsed audit file: claims path, reproductions, and a margin in points or null. */
-    public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints) {}
+    /**
+     * The parsed audit file: claims path, reproductions, a margin in points or null, the user's notes,
+     * and the folder of report templates to use (null: the bundled ones).
+     */
+    public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints, UserNotes notes,
+                            Path templates) {}
 
     private AuditFileReader() {}
 
@@ -104,10 +110,12 @@ public final class AuditFileReader {
                     "add a list entry with at least 'predictions: FILE'");
         }
         List<Reproduction> out = new ArrayList<>();
+        UserNotes notes = UserNotes.none();
         for (int i = 0; i < list.size(); i++) {
             JsonNode r = list.get(i);
             String at = "/reproductions/" + i;
             if (!r.isObject()) throw new UserInputException(file, at, "each reproduction must be a mapping", null);
+            notes = notes.with(notes(file, r, at));
             Task task = r.has("task") ? task(file, at, r.get("task").asText()) : Task.CLASSIFICATION;
             if (task == Task.RETRIEVAL) {
                 out.add(retrieval(file, base, r, at));
@@ -144,7 +152,15 @@ public final class AuditFileReader {
                     path(file, base, r, "manifest", at), path(file, base, r, "truth", at));
             out.add(new ClassificationReproduction(text(r, "table", null), text(r, "row", null), predictions, o));
         }
-        return new AuditFile(claims, out, margin);
+        Path templates = null;
+        if (root.has("templates")) {
+            templates = base.resolve(root.get("templates").asText()).normalize();
+            if (!Files.isDirectory(templates)) {
+                throw new UserInputException(file, "/templates", "template folder not found: " + templates,
+                        "give the folder 'assay init' wrote (relative to the audit file), or remove the line");
+            }
+        }
+        return new AuditFile(claims, out, margin, notes, templates);
     }
 
     private static Task task(Path file, String at, String text) {
@@ -170,6 +186,35 @@ public final class AuditFileReader {
         }
         return new RegressionReproduction(text(r, "table", null), text(r, "row", null), predictions,
                 new RegressionColumns(id, target, prediction));
+    }
+
+    /** {@code notes:} (text) and {@code claim_notes:} (column path to text) of one reproduction. */
+    private static UserNotes notes(Path file, JsonNode r, String at) {
+        String table = text(r, "table", UserNotes.UNNAMED_TABLE);
+        java.util.Map<String, String> tables = new java.util.LinkedHashMap<>();
+        java.util.Map<String, String> claims = new java.util.LinkedHashMap<>();
+        JsonNode n = r.get("notes");
+        if (n != null && !n.isNull()) {
+            if (!n.isTextual()) {
+                throw new UserInputException(file, at + "/notes", "notes must be text", "write notes: \"...\" (a string)");
+            }
+            tables.put(table, n.asText());
+        }
+        JsonNode c = r.get("claim_notes");
+        if (c != null && !c.isNull()) {
+            if (!c.isObject()) {
+                throw new UserInputException(file, at + "/claim_notes", "claim_notes must map column paths to text",
+                        "for example claim_notes: {\"Accuracy\": \"computed with the released checkpoint\"}");
+            }
+            for (Iterator<String> it = c.fieldNames(); it.hasNext(); ) {
+                String key = it.next();
+                if (!c.get(key).isTextual()) {
+                    throw new UserInputException(file, at + "/claim_notes/" + key, "a claim note must be text", null);
+                }
+                claims.put(key, c.get(key).asText());
+            }
+        }
+        return new UserNotes(tables, claims.isEmpty() ? java.util.Map.of() : java.util.Map.of(table, claims));
     }
 
     /** A generation row: a JSON Lines file with references, or a hypotheses file and reference files. */

@@ -10,8 +10,14 @@ import java.util.List;
  * @param reproductions  one entry per reproduced table row
  * @param settings       estimation settings
  * @param margin         default equivalence margin on the fraction scale (0.01 = one percentage point)
+ * @param notes          the user's notes for the replication notes
  */
-public record AuditRequest(Path claims, List<Reproduction> reproductions, EstimationSettings settings, double margin) {
+public record AuditRequest(Path claims, List<Reproduction> reproductions, EstimationSettings settings, double margin,
+                           UserNotes notes) {
+    public AuditRequest(Path claims, List<Reproduction> reproductions, EstimationSettings settings, double margin) {
+        this(claims, reproductions, settings, margin, UserNotes.none());
+    }
+
     public AuditRequest {
         reproductions = List.copyOf(reproductions);
         if (!(margin > 0 && margin < 1)) {

@@ -5,7 +5,8 @@ import org.assay.claims.ClaimsFile;
 
 /**
  * The outcome of an audit: a finding per tested claim, the claims not tested, the inputs with
- * their hashes, the settings, and warnings raised while reading.
+ * their hashes, the settings, and warnings raised while reading; the user's notes, and per table
+ * how its subsample was drawn (what the manifest says), for the replication notes.
  */
 public record AuditResult(
         ClaimsFile claims,
@@ -15,7 +16,9 @@ public record AuditResult(
         EstimationSettings settings,
         double margin,
         List<String> warnings,
-        org.assay.audit.checks.CheckResult checks) {
+        org.assay.audit.checks.CheckResult checks,
+        UserNotes notes,
+        java.util.Map<String, List<String>> sampling) {
 
     public long count(Verdict v) { return findings.stream().filter(f -> f.verdict() == v).count(); }
 }

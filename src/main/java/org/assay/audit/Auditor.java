@@ -33,11 +33,19 @@ public final class Auditor {
 
         List<Finding> findings = new ArrayList<>();
         Set<Claim> audited = new LinkedHashSet<>();
+        Map<String, List<String>> sampling = new java.util.LinkedHashMap<>();
+        UserNotes notes = request.notes();
         for (Reproduction r : request.reproductions()) {
             ClaimTable table = selectTable(claims, r);
+            if (r.tableId() == null) notes = notes.naming(table.id());
             String row = selectRow(claims, table, r);
             Reproduction.Outputs outputs = r.read();
             inputs.addAll(outputs.inputs());
+            sampling.put(table.id(), sampling(outputs));
+            for (String typo : notes.unmatched(table.id(), table.claims())) {
+                warnings.add("the audit file has a note for column '" + typo + "' of table " + table.id()
+                        + ", which no claim has; it is not shown");
+            }
             for (Reproduction.Part part : outputs.parts()) {
                 part.data().warnings().stream().filter(w -> !warnings.contains(w)).forEach(warnings::add);
                 checkSizes(claims, table, part.data(), table.testSize() == null ? null : table.testSize().longValue());
@@ -107,7 +115,20 @@ public final class Auditor {
             }
         }
         var checks = new org.assay.audit.checks.ClaimChecker().check(claims);
-        return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings, checks);
+        return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings, checks,
+                notes, sampling);
+    }
+
+    /** How the reproduction's units were chosen, as far as its manifest says (its # lines), for the report. */
+    private static List<String> sampling(Reproduction.Outputs outputs) {
+        List<String> out = new ArrayList<>();
+        for (InputFile f : outputs.inputs()) {
+            if (!f.role().startsWith("manifest")) continue;
+            var m = org.assay.data.Manifest.read(f.path());
+            out.add("subsample manifest " + f.path().getFileName() + ": " + m.size() + " ids");
+            m.comments().forEach(c -> out.add(c.replaceFirst("^#\\s*", "")));
+        }
+        return out;
     }
 
     /** Holm's step-down adjustment over every computable claim of the audit (Holm 1979). */

@@ -52,6 +52,8 @@ final class BootstrapEvidence implements Evidence {
 
     @Override public double standardError() { return distribution.standardError(); }
 
+    @Override public Histogram histogram() { return Histogram.of(distribution.replicates(), 40); }
+
     @Override
     public double standardErrorAt(long units) {
         double se = distribution.standardError();

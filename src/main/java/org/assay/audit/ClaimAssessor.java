@@ -32,7 +32,7 @@ final class ClaimAssessor {
         notes.addAll(evidence.notes());
         notes.addAll(tableNotes);
         Finding f = new Finding(claim, null, lo, hi, n, population, est, interval, equivalence,
-                evidence.rangeIfTrue(lo, hi, conf), p, p, margin, difference, null, null, notes);
+                evidence.rangeIfTrue(lo, hi, conf), p, p, margin, difference, null, null, notes, evidence.histogram());
         Verdict v = verdict(f);
         Long settle = v == Verdict.INCONCLUSIVE ? itemsToSettle(evidence, n, population, lo, hi, margin) : null;
         return copy(f, v, p, settle);
@@ -72,6 +72,6 @@ final class ClaimAssessor {
     private static Finding copy(Finding f, Verdict v, double adjusted, Long settle) {
         return new Finding(f.claim(), v, f.claimLower(), f.claimUpper(), f.n(), f.population(), f.estimate(),
                 f.interval(), f.equivalence(), f.rangeIfTrue(), f.pValue(), adjusted, f.margin(), f.difference(),
-                settle, f.reason(), f.notes());
+                settle, f.reason(), f.notes(), f.histogram());
     }
 }

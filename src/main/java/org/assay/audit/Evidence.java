@@ -31,6 +31,9 @@ interface Evidence {
     /** Notes on how the evidence was computed (shortcuts used, corrections applied). */
     java.util.List<String> notes();
 
+    /** The resampled values in bins, for a plot; null when the evidence is not a bootstrap. */
+    default Histogram histogram() { return null; }
+
     /** Notes about one claim tested against this evidence (for example a claim no count can produce). */
     default java.util.List<String> claimNotes(double lo, double hi) { return java.util.List.of(); }
 }

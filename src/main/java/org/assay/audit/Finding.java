@@ -24,6 +24,7 @@ import org.assay.stats.Interval;
  * @param itemsToSettle  approximate subsample size at which an inconclusive claim would be settled, or null
  * @param reason         for NOT_COMPUTABLE: why
  * @param notes          method notes and cautions specific to this claim
+ * @param histogram      for bootstrap evidence: the resampled values in bins (for plots); otherwise null
  */
 public record Finding(
         Claim claim,
@@ -42,7 +43,8 @@ public record Finding(
         double difference,
         Long itemsToSettle,
         String reason,
-        List<String> notes) {
+        List<String> notes,
+        Histogram histogram) {
 
     /** "below", "above" or "within" the claim's rounding interval. */
     public String direction() {
@@ -53,6 +55,6 @@ public record Finding(
 
     static Finding notComputable(Claim claim, double lo, double hi, String reason) {
         return new Finding(claim, Verdict.NOT_COMPUTABLE, lo, hi, 0, null, Double.NaN, null, null, null,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN, null, reason, List.of());
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN, null, reason, List.of(), null);
     }
 }

@@ -19,7 +19,7 @@ public record InputFile(String role, Path path, long bytes, String sha256) {
         return abs.startsWith(cwd) ? cwd.relativize(abs) : abs;
     }
 
-    static InputFile of(String role, Path path) {
+    public static InputFile of(String role, Path path) {
         try (InputStream in = Files.newInputStream(path)) {
             MessageDigest md = MessageDigest.getInstance("SHA-256");
             byte[] buf = new byte[1 << 16];

@@ -12,8 +12,7 @@ import org.assay.audit.Auditor;
 import org.assay.audit.Reproduction;
 import org.assay.metrics.Task;
 import org.assay.common.UserInputException;
-import org.assay.report.JsonReport;
-import org.assay.report.MarkdownReport;
+import org.assay.report.AuditReports;
 import org.assay.report.OutputDirectory;
 import org.assay.report.SummaryTable;
 import picocli.CommandLine.ArgGroup;
@@ -27,7 +26,8 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code assay audit}: claims versus a reproduction, claim by claim. */
 @Command(name = "audit", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Tests each claim of a results table against your reproduced predictions.",
-            "Writes report.md and report.json: the reproduced value with its interval, the claim's rounding "
+            "Writes a report (report.md, replication-notes.md, reviewer-comments.md, claims-table.md and report.json; "
+                + "--format adds report.html and claims-table.tex): the reproduced value with its interval, the claim's rounding "
                 + "interval, a p-value (Holm-adjusted across the audit) and a verdict: consistent, "
                 + "inconclusive or discrepant.", ""},
         footer = {"", "Examples:",
@@ -79,6 +79,8 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Overwrite existing report files.")
     boolean force;
 
+    @Mixin ReportOptions report;
+
     @Option(names = "--fail-on", paramLabel = "WHAT", defaultValue = "never",
             description = "Exit 1 when a claim is: discrepant, inconclusive (or worse), not-computable; or never (default).")
     String failOn;
@@ -86,11 +88,11 @@ final class AuditCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FailOn condition = FailOn.parse(failOn);
+        var formats = report.formats();
         AuditRequest request = request();
         AuditResult result = new Auditor().run(request);
-        Map<String, String> files = new LinkedHashMap<>();
-        files.put("report.md", MarkdownReport.render(result, Main.version()));
-        files.put("report.json", JsonReport.render(result, Main.version()));
+        Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
+                report.templates(templatesFromFile));
         List<Path> written = new OutputDirectory(out, force).write(files);
         var stdout = spec.commandLine().getOut();
         result.warnings().forEach(w -> spec.commandLine().getErr().println("assay: " + w));
@@ -100,6 +102,9 @@ final class AuditCommand implements Callable<Integer> {
         return condition.met(result) ? Main.FAIL_ON_MET : Main.DONE;
     }
 
+    /** The audit file's templates: folder, if it names one. */
+    private Path templatesFromFile;
+
     private AuditRequest request() {
         if (auditFile != null) {
             if (claims != null || predictions != null) {
@@ -108,7 +113,8 @@ final class AuditCommand implements Callable<Integer> {
             }
             AuditFileReader.AuditFile f = AuditFileReader.read(auditFile);
             double m = margin != null ? margin : f.marginPoints() != null ? f.marginPoints() : 1.0;
-            return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100);
+            templatesFromFile = f.templates();
+            return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100, f.notes());
         }
         Task t = Task.parse(task);
         if (claims == null || (predictions == null && t != Task.RETRIEVAL)) {

@@ -11,9 +11,11 @@ import org.assay.audit.checks.CheckResult;
 import org.assay.audit.checks.ClaimChecker;
 import org.assay.claims.ClaimTable;
 import org.assay.claims.ClaimsReader;
-import org.assay.report.CheckReport;
+import org.assay.audit.InputFile;
+import org.assay.report.AuditReports;
 import org.assay.report.OutputDirectory;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -24,7 +26,7 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {"Checks printed results without predictions: values that cannot arise on the stated test set.",
             "Finds values no count on the test set can print as, ratios and averages that do not fit their parts, "
                 + "ranges broken, more digits than the test set supports, and leads smaller than the test set can "
-                + "resolve. Writes check.md, check.json and reviewer-comments.md.", ""},
+                + "resolve. Writes check.md, reviewer-comments.md and check.json (--format adds html and tex).", ""},
         footer = {"", "Examples:",
             "  assay check claims.yaml",
             "  assay check examples/birdcalls/claims.yaml --fail-on infeasible",
@@ -49,6 +51,8 @@ final class CheckCommand implements Callable<Integer> {
             description = "Exit 1 when a finding is: infeasible, any (any problem), or never (default).")
     String failOn;
 
+    @Mixin ReportOptions report;
+
     @Override
     public Integer call() {
         String condition = failOn.trim().toLowerCase(java.util.Locale.ROOT);
@@ -56,11 +60,10 @@ final class CheckCommand implements Callable<Integer> {
             throw org.assay.common.UserInputException.usage("unknown --fail-on value '" + failOn + "'",
                     "use infeasible, any or never");
         }
+        var formats = report.formats();
         CheckResult result = new ClaimChecker().check(ClaimsReader.read(claims));
-        Map<String, String> files = new LinkedHashMap<>();
-        files.put("check.md", CheckReport.markdown(result, Main.version()));
-        files.put("check.json", CheckReport.json(result, Main.version()));
-        files.put("reviewer-comments.md", CheckReport.reviewerComments(result));
+        Map<String, String> files = AuditReports.check(result, ReportOptions.provenance(spec),
+                List.of(InputFile.of("claims", claims)), formats, report.templates(null));
         List<Path> written = new OutputDirectory(out, force).write(files);
         var stdout = spec.commandLine().getOut();
         for (ClaimTable t : result.claims().tables()) {

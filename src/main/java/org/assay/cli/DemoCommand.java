@@ -12,8 +12,7 @@ import org.assay.audit.AuditFileReader;
 import org.assay.audit.AuditRequest;
 import org.assay.audit.AuditResult;
 import org.assay.audit.Auditor;
-import org.assay.report.JsonReport;
-import org.assay.report.MarkdownReport;
+import org.assay.report.AuditReports;
 import org.assay.report.OutputDirectory;
 import org.assay.report.SummaryTable;
 import picocli.CommandLine.Command;
@@ -56,8 +55,11 @@ final class DemoCommand implements Callable<Integer> {
 
     @Mixin EstimationOptions estimation;
 
+    @Mixin ReportOptions report;
+
     @Override
     public Integer call() {
+        var formats = report.formats();
         List<String> names = SCENARIOS.get(scenario);
         if (names == null) {
             throw org.assay.common.UserInputException.usage("unknown --scenario '" + scenario + "'", "use birdcalls or harbour");
@@ -68,10 +70,10 @@ final class DemoCommand implements Callable<Integer> {
         new OutputDirectory(inputDir, force).writeBytes(inputs);
         AuditFileReader.AuditFile f = AuditFileReader.read(inputDir.resolve("audit.yaml"));
         double margin = f.marginPoints() == null ? 1.0 : f.marginPoints();
-        AuditResult result = new Auditor().run(new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), margin / 100));
-        Map<String, String> files = new LinkedHashMap<>();
-        files.put("report.md", MarkdownReport.render(result, Main.version()));
-        files.put("report.json", JsonReport.render(result, Main.version()));
+        AuditResult result = new Auditor().run(new AuditRequest(f.claims(), f.reproductions(), estimation.settings(),
+                margin / 100, f.notes()));
+        Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
+                report.templates(f.templates()));
         var written = new OutputDirectory(out, force).write(files);
         var stdout = spec.commandLine().getOut();
         stdout.print(SummaryTable.render(result));

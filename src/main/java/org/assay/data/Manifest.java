@@ -53,7 +53,7 @@ public final class Manifest {
     public int size() { return ids.size(); }
 
     /** The comment lines, with their leading '#'. */
-    List<String> comments() { return comments; }
+    public List<String> comments() { return comments; }
 
     /**
      * The ids of another task's outputs (generation items, say) against the manifest, as

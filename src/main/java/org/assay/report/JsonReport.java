@@ -24,12 +24,13 @@ public final class JsonReport {
 
     private JsonReport() {}
 
-    public static String render(AuditResult r, String toolVersion) {
+    public static String render(AuditResult r, Provenance p) {
         ObjectNode root = JSON.createObjectNode();
         root.put("schema_version", SCHEMA_VERSION);
         ObjectNode tool = root.putObject("tool");
         tool.put("name", "assay");
-        tool.put("version", toolVersion);
+        tool.put("version", p.version());
+        root.set("provenance", provenance(p));
         ObjectNode s = root.putObject("settings");
         s.put("confidence", r.settings().confidence());
         s.put("interval", r.settings().interval().id());
@@ -66,6 +67,20 @@ public final class JsonReport {
         } catch (JsonProcessingException e) {
             throw new IllegalStateException(e);
         }
+    }
+
+    /** How the report was made; {@code assay audit --rerun} repeats the run from it. */
+    static ObjectNode provenance(Provenance p) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("version", p.version());
+        o.put("commit", p.commit());
+        o.put("java", p.java());
+        o.put("os", p.os());
+        ArrayNode args = o.putArray("arguments");
+        p.arguments().forEach(args::add);
+        o.put("command", p.command());
+        o.put("working_directory", p.workingDirectory());
+        return o;
     }
 
     private static ObjectNode claim(Claim c) {
@@ -114,6 +129,13 @@ public final class JsonReport {
         if (f.itemsToSettle() == null) o.putNull("items_to_settle"); else o.put("items_to_settle", f.itemsToSettle());
         ArrayNode notes = o.putArray("notes");
         f.notes().forEach(notes::add);
+        if (f.histogram() != null) {
+            ObjectNode h = o.putObject("bootstrap_histogram");
+            num(h, "lower", f.histogram().lower());
+            num(h, "width", f.histogram().width());
+            ArrayNode counts = h.putArray("counts");
+            for (int c : f.histogram().counts()) counts.add(c);
+        }
         return o;
     }
 

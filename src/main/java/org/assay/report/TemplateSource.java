@@ -1,0 +1,76 @@
+package org.assay.report;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Pattern;
+import org.assay.common.UserInputException;
+
+/**
+ * Where report templates come from: a folder of the user's (from {@code assay init} or
+ * {@code --template DIR}), falling back to the templates bundled in the jar for any file the
+ * folder does not have. Only plain file names are looked up, never paths, so a template (or a
+ * partial it includes) cannot read a file outside the folder.
+ */
+public final class TemplateSource {
+    /** Template files are small; a larger one is a mistake or a hostile file. */
+    static final long MAX_BYTES = 1 << 20;
+    private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_.-]{0,99}");
+
+    private final Path folder;
+
+    private TemplateSource(Path folder) { this.folder = folder; }
+
+    /** The bundled templates only. */
+    public static TemplateSource bundled() { return new TemplateSource(null); }
+
+    /** The user's folder first, the bundled templates for the rest. */
+    public static TemplateSource folder(Path folder) {
+        if (!Files.isDirectory(folder)) {
+            throw new UserInputException(folder, null, "the template folder does not exist",
+                    "give the folder 'assay init' wrote, or leave out --template");
+        }
+        return new TemplateSource(folder);
+    }
+
+    /** The user's folder, or null for the bundled templates. */
+    public Path folder() { return folder; }
+
+    /** The text of template {@code name} ("report.md.mustache"); partials are looked up the same way. */
+    public String load(String name) {
+        if (!NAME.matcher(name).matches() || name.contains("..")) {
+            throw new UserInputException(folder, null, "template name '" + name + "' is not a plain file name",
+                    "include partials by file name only, such as {{> table-row.md.mustache}}");
+        }
+        if (folder != null) {
+            Path p = folder.resolve(name);
+            if (Files.isRegularFile(p)) return read(p);
+        }
+        try (InputStream in = TemplateSource.class.getResourceAsStream("/templates/" + name)) {
+            if (in == null) {
+                throw new UserInputException(folder, null, "no template named '" + name + "'",
+                        "check the name, or copy the shipped templates with 'assay init'");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static String read(Path p) {
+        try {
+            if (Files.size(p) > MAX_BYTES) {
+                throw new UserInputException(p, null, "the template is larger than " + (MAX_BYTES >> 10) + " KiB",
+                        "templates are small text files; check that this is the right file");
+            }
+            return Files.readString(p, StandardCharsets.UTF_8);
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new UserInputException(p, null, "the template is not UTF-8 text", "save it as UTF-8");
+        } catch (IOException e) {
+            throw new UserInputException(p, null, "cannot read the template: " + e.getMessage(), "check the file");
+        }
+    }
+}
