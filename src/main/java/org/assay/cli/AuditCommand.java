@@ -35,6 +35,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "      --table T2 --row \"ChirpNet (ours)\" --positive 1 --out audit-report",
             "  assay audit examples/birdcalls/audit.yaml --out audit-report --fail-on discrepant",
             "  assay audit --claims claims.yaml --task generation --predictions outputs.jsonl --table T3 --row Ours",
+            "  assay audit --rerun audit-report/report.json     # repeat it; exit 1 unless identical",
             "",
             "An audit file names the claims file and, per reproduced table row, the predictions:",
             "  claims: claims.yaml",
@@ -81,12 +82,26 @@ final class AuditCommand implements Callable<Integer> {
 
     @Mixin ReportOptions report;
 
+    @Option(names = "--rerun", paramLabel = "REPORT_JSON",
+            description = "Repeat the audit recorded in a report.json (its provenance block) and say whether the "
+                    + "result is identical; input files are checked against their recorded SHA-256.")
+    Path rerun;
+
     @Option(names = "--fail-on", paramLabel = "WHAT", defaultValue = "never",
             description = "Exit 1 when a claim is: discrepant, inconclusive (or worse), not-computable; or never (default).")
     String failOn;
 
     @Override
-    public Integer call() {
+    public Integer call() throws java.io.IOException {
+        if (rerun != null) {
+            if (auditFile != null || claims != null) {
+                throw UserInputException.usage("--rerun repeats a recorded audit; give no audit file or --claims with it",
+                        "run 'assay audit --rerun report.json' on its own");
+            }
+            int code = Rerun.run(rerun, spec.commandLine().getOut());
+            spec.commandLine().getOut().flush();
+            return code;
+        }
         FailOn condition = FailOn.parse(failOn);
         var formats = report.formats();
         AuditRequest request = request();

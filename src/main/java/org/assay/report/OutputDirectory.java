@@ -30,18 +30,23 @@ public final class OutputDirectory {
         return writeBytes(bytes);
     }
 
-    /** Writes {@code files} (name to bytes); returns the paths written. */
-    public java.util.List<Path> writeBytes(Map<String, byte[]> files) {
+    /** Fails, before anything is written, when a file of {@code names} exists and {@code force} is off. */
+    public void checkWritable(java.util.Collection<String> names) {
         if (Files.exists(dir) && !Files.isDirectory(dir)) {
             throw new UserInputException(dir, null, "the output path exists and is not a folder", "choose another --out");
         }
-        for (String name : files.keySet()) {
+        for (String name : names) {
             Path target = dir.resolve(name);
             if (Files.exists(target) && !force) {
                 throw new UserInputException(target, null, "refusing to overwrite an existing file",
                         "pass --force to replace it, or choose another --out");
             }
         }
+    }
+
+    /** Writes {@code files} (name to bytes); returns the paths written. */
+    public java.util.List<Path> writeBytes(Map<String, byte[]> files) {
+        checkWritable(files.keySet());
         boolean created = !Files.exists(dir);
         try {
             Files.createDirectories(dir);

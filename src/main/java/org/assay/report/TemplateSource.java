@@ -20,6 +20,12 @@ public final class TemplateSource {
     static final long MAX_BYTES = 1 << 20;
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_.-]{0,99}");
 
+    /** Every template shipped in audit-templates/ (a test keeps this list equal to the folder). */
+    public static final java.util.List<String> SHIPPED = java.util.List.of(
+            "report.md.mustache", "report.html.mustache", "replication-notes.md.mustache", "reviewer-comments.md.mustache",
+            "claims-table.md.mustache", "claims-table.tex.mustache", "check.md.mustache", "check.html.mustache",
+            "check-findings.md.mustache", "check-findings.tex.mustache", "cautions.md.mustache", "provenance.md.mustache");
+
     private final Path folder;
 
     private TemplateSource(Path folder) { this.folder = folder; }

@@ -1,0 +1,95 @@
+package org.assay.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.assay.common.UserInputException;
+import org.assay.report.TemplateRenderer.Escaping;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The template engine places values and repeats sections, nothing more: expression and lookup
+ * syntax of other template languages comes out as text, objects expose no methods, partials
+ * cannot leave the template folder, and every value is escaped for its format.
+ */
+class TemplateRendererTest {
+    @TempDir Path dir;
+
+    private String render(String template, Map<String, Object> model, Escaping escaping) throws Exception {
+        Files.writeString(dir.resolve("t.mustache"), template);
+        return new TemplateRenderer(TemplateSource.folder(dir)).render("t.mustache", model, escaping);
+    }
+
+    @Test
+    void expressionAndLookupSyntaxOfOtherEnginesIsRenderedLiterally() throws Exception {
+        // StringSubstitutor lookups (${script:...}, ${file:...}), JSP/EL and Velocity-style syntax
+        String template = "${script:javascript:1+1} ${file:UTF-8:/etc/passwd} #{1+1} $!{x} <%= 7*7 %> {{title}}";
+        String out = render(template, Map.of("title", "ok"), Escaping.NONE);
+        assertThat(out).isEqualTo("${script:javascript:1+1} ${file:UTF-8:/etc/passwd} #{1+1} $!{x} <%= 7*7 %> ok");
+    }
+
+    @Test
+    void valuesExposeNoMethodsOrFields() throws Exception {
+        // a template cannot reach getClass(), a String's methods or a map's own methods
+        String out = render("[{{title.class}}][{{title.bytes}}][{{title.length}}][{{model.size}}][{{model.entrySet}}]",
+                Map.of("title", "abc", "model", Map.of("a", "1")), Escaping.NONE);
+        assertThat(out).isEqualTo("[][][][][]");
+    }
+
+    @Test
+    void aValueThatLooksLikeATemplateIsNotRenderedAgain() throws Exception {
+        String out = render("{{label}}", Map.of("label", "{{secret}} ${env:HOME}", "secret", "leak"), Escaping.NONE);
+        assertThat(out).isEqualTo("{{secret}} ${env:HOME}");
+    }
+
+    @Test
+    void partialsResolveByPlainNameInsideTheFolderOnly() throws Exception {
+        Files.writeString(dir.resolve("part.mustache"), "[{{x}}]");
+        assertThat(render("a{{> part.mustache}}b", Map.of("x", "1"), Escaping.NONE)).isEqualTo("a[1]b");
+        Files.writeString(dir.getParent().resolve("outside.mustache"), "secret");
+        for (String bad : List.of("../outside.mustache", "/etc/passwd", "sub/part.mustache")) {
+            assertThatThrownBy(() -> render("{{> " + bad + "}}", Map.of(), Escaping.NONE))
+                    .isInstanceOf(UserInputException.class).hasMessageContaining("not a plain file name");
+        }
+    }
+
+    @Test
+    void eachFormatEscapesItsSpecialCharacters() throws Exception {
+        Map<String, Object> m = Map.of("v", "<img src=x onerror=alert(1)> & \"q\" | 50% $x_1 \\cmd{y}");
+        assertThat(render("{{v}}", m, Escaping.HTML))
+                .isEqualTo("&lt;img src=x onerror=alert(1)&gt; &amp; &quot;q&quot; | 50% $x_1 \\cmd{y}");
+        assertThat(render("{{v}}", m, Escaping.MARKDOWN)).contains("&lt;img").contains("\\|").doesNotContain("<img");
+        String tex = render("{{v}}", m, Escaping.LATEX);
+        assertThat(tex).contains("50\\%").contains("\\$x\\_1").contains("\\textbackslash{}cmd\\{y\\}").contains("\\&");
+    }
+
+    @Test
+    void aUsersTemplateFolderOverridesTheShippedOnesFileByFile() throws Exception {
+        Files.writeString(dir.resolve("cautions.md.mustache"), "MY CAUTIONS for {{title}}");
+        TemplateSource source = TemplateSource.folder(dir);
+        assertThat(new TemplateRenderer(source).render("cautions.md.mustache", Map.of("title", "T"), Escaping.MARKDOWN))
+                .isEqualTo("MY CAUTIONS for T");
+        // a file the folder lacks comes from the shipped set
+        assertThat(source.load("provenance.md.mustache")).contains("## Provenance");
+    }
+
+    @Test
+    void theShippedListNamesExactlyTheFilesOfAuditTemplates() throws Exception {
+        try (var files = Files.list(Path.of("audit-templates"))) {
+            assertThat(files.map(p -> p.getFileName().toString()).sorted().toList())
+                    .containsExactlyInAnyOrderElementsOf(TemplateSource.SHIPPED);
+        }
+    }
+
+    @Test
+    void anOversizedTemplateIsRefused() throws Exception {
+        Files.write(dir.resolve("big.mustache"), new byte[(int) TemplateSource.MAX_BYTES + 1]);
+        assertThatThrownBy(() -> TemplateSource.folder(dir).load("big.mustache"))
+                .isInstanceOf(UserInputException.class).hasMessageContaining("larger than");
+    }
+}
