@@ -24,7 +24,8 @@ public final class TemplateSource {
     public static final java.util.List<String> SHIPPED = java.util.List.of(
             "report.md.mustache", "report.html.mustache", "replication-notes.md.mustache", "reviewer-comments.md.mustache",
             "claims-table.md.mustache", "claims-table.tex.mustache", "check.md.mustache", "check.html.mustache",
-            "check-findings.md.mustache", "check-findings.tex.mustache", "cautions.md.mustache", "provenance.md.mustache");
+            "check-findings.md.mustache", "check-findings.tex.mustache", "cautions.md.mustache", "provenance.md.mustache",
+            "check-findings.html.mustache", "cautions.html.mustache", "provenance.html.mustache", "report-style.html.mustache");
 
     private final Path folder;
 
