@@ -60,9 +60,29 @@ public final class Pdflatex {
             if (!missing.isEmpty()) {
                 missingToolsCache = "LaTeX packages not found by kpsewhich: " + missing
                         + " (apt-get install texlive-latex-recommended lmodern)";
+            } else {
+                missingToolsCache = smokeTest();
             }
         }
         return missingToolsCache;
+    }
+
+    /** A document that uses nothing of assay's: if it does not compile, the installation is broken. */
+    private static String smokeTest() {
+        try {
+            Path dir = Files.createTempDirectory("assay-pdflatex-");
+            Files.writeString(dir.resolve("smoke.tex"), "\\documentclass{article}\\usepackage[T1]{fontenc}"
+                    + "\\usepackage{lmodern}\\usepackage{booktabs}\\begin{document}smoke\\end{document}\n");
+            Finished f = execute(dir, 300, "pdflatex", "-interaction=nonstopmode", "-halt-on-error", "smoke.tex");
+            try (var files = Files.list(dir)) {
+                files.forEach(p -> p.toFile().delete());
+            }
+            Files.delete(dir);
+            return f.exitCode() == 0 ? null : "pdflatex cannot compile a minimal document (broken installation?): "
+                    + tail(f.output(), 3).replace('\n', ' ');
+        } catch (IOException e) {
+            return "cannot try pdflatex: " + e.getMessage();
+        }
     }
 
     /**
