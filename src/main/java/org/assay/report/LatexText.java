@@ -10,15 +10,16 @@ import java.util.Set;
  * Any string as LaTeX text that pdflatex prints as text and never executes. Written by hand because no
  * maintained Java library converts Unicode to LaTeX for pdflatex; the choices follow the LaTeX kernel's
  * own command names (LaTeX2e font encodings, {@code encguide}) and are checked by compiling every
- * character with pdflatex ({@code LatexCompileTest}).
+ * character with pdflatex ({@code LatexTextCompileTest}).
  *
  * <ul>
  *   <li>The ten special characters {@code \ { } $ & # % _ ^ ~} become text commands, so a label can
  *       never start a command, a group, math, an alignment cell, a comment or a {@code ^^} escape.</li>
  *   <li>ASCII that pdfTeX would turn into something else does not reach it raw: {@code < > |} (other
- *       glyphs in the OT1 encoding), {@code `} and the ligatures {@code --}, {@code ''}, {@code ,,}; brackets
- *       are braced ({@code {[}}) so no value is taken for an optional argument of {@code \\} or
- *       {@code \item}, and a leading {@code *} is braced so it is not read as {@code \\*}.</li>
+ *       glyphs in the OT1 encoding), {@code `} and the ligatures {@code --}, {@code ''}, {@code ,,};
+ *       brackets are braced ({@code {[}}) so no value is taken for an optional argument of {@code \\},
+ *       {@code \midrule} or {@code \item}, and a leading {@code *} is braced so it is not read as
+ *       {@code \\*}.</li>
  *   <li>Latin-1 and Latin Extended-A letters and signs are left to LaTeX's utf8 input encoding with the
  *       T1 font encoding (the templates load {@code fontenc} T1), except the nine it has no definition for.</li>
  *   <li>Common symbols are mapped to LaTeX commands: dashes and quotes, arrows, relations, ± × − …,
