@@ -30,26 +30,8 @@ final class Escape {
                 .replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
-    /** LaTeX text mode: the ten special characters, so a label can never run a command. */
+    /** LaTeX text mode: specials, ligatures and Unicode made printable text ({@link LatexText}). */
     static String latex(String s) {
-        StringBuilder sb = new StringBuilder(s.length() + 16);
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '\\' -> sb.append("\\textbackslash{}");
-                case '{' -> sb.append("\\{");
-                case '}' -> sb.append("\\}");
-                case '$' -> sb.append("\\$");
-                case '&' -> sb.append("\\&");
-                case '#' -> sb.append("\\#");
-                case '%' -> sb.append("\\%");
-                case '_' -> sb.append("\\_");
-                case '^' -> sb.append("\\textasciicircum{}");
-                case '~' -> sb.append("\\textasciitilde{}");
-                case '\n', '\r' -> sb.append(' ');
-                default -> sb.append(c);
-            }
-        }
-        return sb.toString();
+        return LatexText.of(s);
     }
 }
