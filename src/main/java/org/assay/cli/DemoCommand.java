@@ -31,8 +31,9 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "ROC AUC on 4,000 clips; a replicator re-ran it on a random 400-clip subsample.",
             "harbour: a photo-caption retrieval paper claims Recall@K both ways on 2,000 photos x 3 captions; "
                 + "a replicator re-ran 150 photos, with scores kept only for each query's top 24.",
-            "Writes the inputs and report.md / report.json to --out.", ""},
+            "Writes the inputs and the report (--format: md, html, json, tex) to --out.", ""},
         footer = {"", "Examples:", "  assay demo --out assay-demo && less assay-demo/report.md",
+            "  assay demo --format md,html,json,tex --out assay-demo",
             "  assay demo --scenario harbour --out harbour-demo"})
 final class DemoCommand implements Callable<Integer> {
     /** The files of each bundled scenario, copied as they are (binary safe). */
