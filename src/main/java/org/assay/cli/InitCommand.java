@@ -52,7 +52,10 @@ final class InitCommand implements Callable<Integer> {
             throw UserInputException.usage("unknown --task '" + task + "'", "use " + String.join(", ", TASKS));
         }
         Map<String, byte[]> templates = new LinkedHashMap<>();
-        for (String name : TemplateSource.SHIPPED) templates.put(name, resource("/templates/" + name));
+        TemplateSource shipped = TemplateSource.bundled();
+        for (String name : TemplateSource.SHIPPED) {
+            templates.put(name, shipped.load(name).getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        }
         // check both folders before writing either, so a refusal leaves nothing half-written
         OutputDirectory templateDir = new OutputDirectory(out.resolve("audit-templates"), force);
         OutputDirectory top = new OutputDirectory(out, force);

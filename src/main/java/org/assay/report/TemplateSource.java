@@ -31,8 +31,16 @@ public final class TemplateSource {
 
     private TemplateSource(Path folder) { this.folder = folder; }
 
-    /** The bundled templates only. */
-    public static TemplateSource bundled() { return new TemplateSource(null); }
+    /**
+     * The shipped templates: those bundled in the jar, or, when the system property
+     * {@code assay.templates} names a folder (the {@code ./assay} launcher points it at the
+     * checkout's audit-templates/), that folder first, so an edit there shows in the next report
+     * without rebuilding the jar.
+     */
+    public static TemplateSource bundled() {
+        String dev = System.getProperty("assay.templates");
+        return dev != null && Files.isDirectory(Path.of(dev)) ? new TemplateSource(Path.of(dev)) : new TemplateSource(null);
+    }
 
     /** The user's folder first, the bundled templates for the rest. */
     public static TemplateSource folder(Path folder) {

@@ -92,4 +92,20 @@ class TemplateRendererTest {
         assertThatThrownBy(() -> TemplateSource.folder(dir).load("big.mustache"))
                 .isInstanceOf(UserInputException.class).hasMessageContaining("larger than");
     }
+
+    @Test
+    void theLaunchersTemplateFolderServesAsTheShippedSetWithoutARebuild() throws Exception {
+        // ./assay passes -Dassay.templates=<checkout>/audit-templates
+        Files.writeString(dir.resolve("cautions.md.mustache"), "edited in the checkout");
+        String before = System.getProperty("assay.templates");
+        try {
+            System.setProperty("assay.templates", dir.toString());
+            assertThat(TemplateSource.bundled().load("cautions.md.mustache")).isEqualTo("edited in the checkout");
+            assertThat(TemplateSource.bundled().load("provenance.md.mustache")).contains("## Provenance");   // from the jar
+            System.setProperty("assay.templates", dir.resolve("missing").toString());
+            assertThat(TemplateSource.bundled().load("cautions.md.mustache")).contains("## Cautions");
+        } finally {
+            if (before == null) System.clearProperty("assay.templates"); else System.setProperty("assay.templates", before);
+        }
+    }
 }
