@@ -41,7 +41,7 @@ public final class Auditor {
             String row = selectRow(claims, table, r);
             Reproduction.Outputs outputs = r.read();
             inputs.addAll(outputs.inputs());
-            sampling.put(table.id(), sampling(outputs));
+            sampling.put(table.id(), sampling(outputs, warnings));
             for (String typo : notes.unmatched(table.id(), table.claims())) {
                 warnings.add("the audit file has a note for column '" + typo + "' of table " + table.id()
                         + ", which no claim has; it is not shown");
@@ -119,14 +119,17 @@ public final class Auditor {
                 notes, sampling);
     }
 
-    /** How the reproduction's units were chosen, as far as its manifest says (its # lines), for the report. */
-    private static List<String> sampling(Reproduction.Outputs outputs) {
+    /**
+     * How the reproduction's units were chosen, as far as its manifest says, for the report; a
+     * manifest assay drew is redrawn to verify it, and a contiguous block of ids is warned about.
+     */
+    private static List<String> sampling(Reproduction.Outputs outputs, List<String> warnings) {
         List<String> out = new ArrayList<>();
         for (InputFile f : outputs.inputs()) {
             if (!f.role().startsWith("manifest")) continue;
-            var m = org.assay.data.Manifest.read(f.path());
-            out.add("subsample manifest " + f.path().getFileName() + ": " + m.size() + " ids");
-            m.comments().forEach(c -> out.add(c.replaceFirst("^#\\s*", "")));
+            SubsampleManifests.Check check = SubsampleManifests.check(f.path());
+            out.addAll(check.description());
+            check.warnings().stream().filter(w -> !warnings.contains(w)).forEach(warnings::add);
         }
         return out;
     }

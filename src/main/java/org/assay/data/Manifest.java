@@ -47,7 +47,15 @@ public final class Manifest {
         return new Manifest(ids, List.copyOf(comments));
     }
 
-    IdRegistry ids() { return ids; }
+    /** The registry of the listed ids, with their lines. */
+    IdRegistry registry() { return ids; }
+
+    /** The listed ids, in file order. */
+    public java.util.List<String> ids() {
+        java.util.List<String> out = new java.util.ArrayList<>(ids.size());
+        for (int i = 0; i < ids.size(); i++) out.add(ids.id(i));
+        return out;
+    }
 
     /** Number of ids listed. */
     public int size() { return ids.size(); }
