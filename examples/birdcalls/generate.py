@@ -7,8 +7,14 @@ A replicator re-ran the released model on a seeded random subsample of 400 clips
 simulated model is slightly weaker on the rare species than the paper says, so the macro F1
 claim should come out discrepant while accuracy does not. Everything here is made up.
 
-Writes predictions.csv and subsample.txt next to this script (claims.yaml and audit.yaml are
-written by hand). Re-running gives the same bytes.
+Writes test-ids.txt (the full test set's clip ids), subsample.txt and predictions.csv next to
+this script (claims.yaml and audit.yaml are written by hand). Re-running gives the same bytes.
+
+The subsample is drawn the way `assay sample test-ids.txt --n 400 --seed 4427` draws it, so that
+command rewrites subsample.txt byte for byte and `assay audit` can redraw it: a partial
+Fisher-Yates shuffle driven by SplitMix64 (Steele, Lea & Flood 2014, OOPSLA), the generator behind
+Java's SplittableRandom, with its rejection rule for bounded integers, written out below from the
+published algorithm.
 """
 import hashlib
 import math
@@ -23,6 +29,49 @@ STRENGTH = {"robin": 3.4, "wren": 3.3, "thrush": 3.0, "warbler": 1.4, "finch": 1
 TEST_SIZE = 4000
 SUBSAMPLE = 400
 SEED = 4417
+SAMPLE_SEED = 4427
+MASK64 = (1 << 64) - 1
+
+
+class SplitMix64:
+    """SplitMix64 with the golden-ratio gamma, as java.util.SplittableRandom(seed)."""
+    GAMMA = 0x9E3779B97F4A7C15
+
+    def __init__(self, seed):
+        self.seed = seed & MASK64
+
+    def next_seed(self):
+        self.seed = (self.seed + self.GAMMA) & MASK64
+        return self.seed
+
+    def next_int(self):
+        z = self.next_seed()
+        z = ((z ^ (z >> 33)) * 0x62A9D9ED799705F5) & MASK64
+        z = (((z ^ (z >> 28)) * 0xCB24D0A5C88C35B3) & MASK64) >> 32
+        return z - (1 << 32) if z >= (1 << 31) else z          # a signed 32-bit int
+
+    def next_below(self, bound):
+        """A uniform integer in [0, bound), rejecting over-represented candidates."""
+        r = self.next_int()
+        m = bound - 1
+        if bound & m == 0:
+            return r & m
+        u = (r & 0xFFFFFFFF) >> 1
+        while True:
+            r = u % bound
+            if u + m - r < (1 << 31):                           # no signed 32-bit overflow: accept
+                return r
+            u = (self.next_int() & 0xFFFFFFFF) >> 1
+
+
+def simple_random_sample(population, n, seed):
+    """Sorted positions of n of population items: the first n of a seeded partial Fisher-Yates shuffle."""
+    rng = SplitMix64(seed)
+    a = list(range(population))
+    for i in range(n):
+        j = i + rng.next_below(population - i)
+        a[i], a[j] = a[j], a[i]
+    return sorted(a[:n])
 
 
 def softmax(xs):
@@ -43,11 +92,16 @@ def main():
         clips.append((f"dc4k-{i + 1:05d}", truth, probs))
 
     ids = [c[0] for c in clips]
-    chosen = sorted(random.Random(SEED + 1).sample(range(TEST_SIZE), SUBSAMPLE))
+    with open(os.path.join(HERE, "test-ids.txt"), "w") as f:
+        for cid in ids:
+            f.write(cid + "\n")
+    chosen = simple_random_sample(TEST_SIZE, SUBSAMPLE, SAMPLE_SEED)
     with open(os.path.join(HERE, "subsample.txt"), "w") as f:
         digest = hashlib.sha256("\n".join(ids).encode()).hexdigest()
-        f.write(f"# simple random sample of {SUBSAMPLE} of {TEST_SIZE} clips, seed {SEED + 1}\n")
-        f.write(f"# sha256 of the full id list: {digest}\n")
+        f.write("# assay subsample manifest\n")
+        f.write("# method: simple random sample without replacement\n")
+        f.write(f"# seed: {SAMPLE_SEED}\n# n: {SUBSAMPLE}\n# N: {TEST_SIZE}\n# id list: test-ids.txt\n")
+        f.write(f"# id list sha256: {digest} (the ids in file order joined by newlines, UTF-8)\n")
         for j in chosen:
             f.write(ids[j] + "\n")
     with open(os.path.join(HERE, "predictions.csv"), "w") as f:

@@ -38,7 +38,7 @@ import picocli.CommandLine.Model.CommandSpec;
 final class DemoCommand implements Callable<Integer> {
     /** The files of each bundled scenario, copied as they are (binary safe). */
     static final Map<String, List<String>> SCENARIOS = Map.of(
-            "birdcalls", List.of("claims.yaml", "audit.yaml", "predictions.csv", "subsample.txt", "README.md"),
+            "birdcalls", List.of("claims.yaml", "audit.yaml", "predictions.csv", "subsample.txt", "test-ids.txt", "README.md"),
             "harbour", List.of("claims.yaml", "audit.yaml", "scores-photo-to-caption.npy", "scores-caption-to-photo.npy",
                     "relevance-photo-to-caption.json", "relevance-caption-to-photo.json", "subsample.txt", "README.md"));
 

@@ -55,7 +55,7 @@ class HtmlReportCommandTest {
                         + "DawnChorus-4k test set", "Claims not audited", "Claim-only checks", "How to read this report",
                 "Cautions", "Provenance");
         assertThat(d.select("#cautions").text()).contains("not a validation").contains("decisions about people")
-                .contains("subsample manifest subsample.txt");
+                .contains("subsample.txt: simple random sample without replacement of 400 from 4000 ids");
     }
 
     @Test

@@ -94,4 +94,25 @@ class SampleCommandTest {
                 tmp.resolve("preds.csv").toString(), "--manifest", tmp.resolve(manifest).toString(),
                 "--out", tmp.resolve("r").toString(), "--force", "--resamples", "200");
     }
+
+    @Test
+    void sampleThenAuditRunsEndToEndOnTheDemo() throws Exception {
+        Path demo = tmp.resolve("demo");
+        assertThat(CliRun.of("demo", "--out", demo.toString(), "--resamples", "200", "--format", "json").exitCode()).isZero();
+        Path inputs = demo.resolve("inputs");
+        CliRun sample = CliRun.of("sample", inputs.resolve("test-ids.txt").toString(), "--n", "400", "--seed", "4427",
+                "--out", inputs.resolve("drawn.txt").toString());
+        assertThat(sample.exitCode()).as(sample.err()).isZero();
+        // examples/birdcalls/generate.py drew subsample.txt with its own SplitMix64 (Steele, Lea & Flood
+        // 2014, written out from the published algorithm in Python): assay's draw is the same, byte for byte
+        assertThat(Files.readString(inputs.resolve("drawn.txt"))).isEqualTo(Files.readString(inputs.resolve("subsample.txt")));
+        Files.writeString(inputs.resolve("audit.yaml"), Files.readString(inputs.resolve("audit.yaml"))
+                .replace("manifest: subsample.txt", "manifest: drawn.txt"));
+        CliRun audit = CliRun.of("audit", inputs.resolve("audit.yaml").toString(), "--out", tmp.resolve("r").toString(),
+                "--resamples", "200");
+        assertThat(audit.exitCode()).as(audit.err()).isZero();
+        assertThat(audit.err()).doesNotContain("redraw").doesNotContain("random draw");
+        assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("drawn.txt: simple random sample without replacement of 400 from 4000 ids, seed 4427")
+                .contains("redrawn from its header");
+    }
 }
