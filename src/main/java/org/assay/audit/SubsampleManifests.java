@@ -86,12 +86,12 @@ public final class SubsampleManifests {
                     + " from " + header.getOrDefault("N", "?") + " ids, seed " + header.getOrDefault("seed", "?")
                     + (stratified ? ", by " + header.getOrDefault("stratify by", "?") + " (" + header.getOrDefault("allocation", "") + ")" : ""));
             if (stratified) {
-                description.add("the intervals treat this stratified draw as a simple random sample, which with "
+                description.add("The intervals treat this stratified draw as a simple random sample, which with "
                         + "proportional allocation makes them somewhat wider than a stratified analysis would");
             }
             String redraw = redraw(manifestFile, header, m.ids());
             if (redraw != null) warnings.add(redraw);
-            else description.add("redrawn from its header (seed and id list): the same ids");
+            else description.add("Redrawn from its header (seed and id list): the same ids");
         } else {
             description.add(name + ": " + m.size() + " ids");
             m.comments().forEach(c -> description.add(c.replaceFirst("^#\\s*", "")));

@@ -61,7 +61,7 @@ class SampleCommandTest {
                 "drawn.txt");
         assertThat(drawn.exitCode()).as(drawn.err()).isZero();
         assertThat(drawn.err()).doesNotContain("contiguous").doesNotContain("redraw");
-        assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("redrawn from its header");
+        assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("Redrawn from its header");
 
         // the first 40 ids in file order: warned
         Files.write(tmp.resolve("first.txt"), ids.subList(0, 40));
@@ -113,6 +113,6 @@ class SampleCommandTest {
         assertThat(audit.exitCode()).as(audit.err()).isZero();
         assertThat(audit.err()).doesNotContain("redraw").doesNotContain("random draw");
         assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("drawn.txt: simple random sample without replacement of 400 from 4000 ids, seed 4427")
-                .contains("redrawn from its header");
+                .contains("Redrawn from its header");
     }
 }
