@@ -197,7 +197,7 @@ public final class ReportModel {
                 .append(Display.percent(c.interval().confidence())).append(" interval [").append(signed(a, c.interval().lower()))
                 .append(", ").append(signed(a, c.interval().upper())).append("], ").append(c.interval().method()).append("), ")
                 .append(c.claimedGapInInterval() ? "which the claimed gap meets" : "which the claimed gap lies outside of")
-                .append(". ").append(c.test()).append(" p = ").append(Display.p(c.pValue())).append(", ")
+                .append(". Test: ").append(c.test()).append(", p = ").append(Display.p(c.pValue())).append("; ")
                 .append(adjustedLabel(method)).append("-adjusted p = ").append(Display.p(c.adjustedP())).append(": ");
         sb.append(switch (c.verdict()) {
             case ORDERING_REPLICATED -> "the printed ordering is replicated.";
