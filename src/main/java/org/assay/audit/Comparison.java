@@ -22,7 +22,7 @@ import org.assay.stats.Interval;
  * @param pValue          two-sided p-value of "the rows do not differ"
  * @param adjustedP       the same adjusted across the audit's comparisons (the audit's multiplicity method)
  * @param verdict         the verdict on the claimed ordering
- * @param discordant      for count metrics, items only A gets right and items only B gets right; else null
+ * @param discordant      for count metrics, items counted (outcome 1) for A only and for B only; else null
  * @param reason          for NOT_COMPUTABLE: why; else null
  * @param notes           how the evidence was computed
  */

@@ -19,7 +19,7 @@ final class PairedCountEvidence implements PairedEvidence {
     private final List<String> notes = new ArrayList<>();
 
     /**
-     * @param onlyA    items whose outcome is 1 for A and 0 for B
+     * @param onlyA    items whose outcome is 1 for A and 0 for B (a hit, or an error for error_rate)
      * @param onlyB    items whose outcome is 0 for A and 1 for B
      * @param interval the paired bootstrap of the same gap, for its interval
      */
@@ -27,8 +27,8 @@ final class PairedCountEvidence implements PairedEvidence {
         this.onlyA = onlyA;
         this.onlyB = onlyB;
         this.interval = interval;
-        notes.add("McNemar's exact test on the " + (onlyA + onlyB) + " items where the rows differ (" + onlyA + " favour the first, "
-                + onlyB + " the second)");
+        notes.add("McNemar's exact test on the " + (onlyA + onlyB) + " items where the rows differ (" + onlyA
+                + " counted for the first row only, " + onlyB + " for the second only)");
         if (population != null) {
             notes.add("McNemar's test ignores the finite-population correction, which makes it conservative");
         }

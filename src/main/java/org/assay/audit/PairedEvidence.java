@@ -25,6 +25,6 @@ interface PairedEvidence {
     /** How the evidence was computed (corrections, fallbacks). */
     List<String> notes();
 
-    /** For count metrics: items only A gets right and items only B gets right; otherwise null. */
+    /** For count metrics: items counted (outcome 1) for A only and for B only; otherwise null. */
     default long[] discordant() { return null; }
 }
