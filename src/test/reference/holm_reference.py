@@ -1,9 +1,11 @@
 #!/usr/bin/python3
-"""Reference values for org.assay.stats.Multiplicity.holm.
+"""Reference values for org.assay.stats.Multiplicity.holm and .benjaminiHochberg.
 
 Run with /usr/bin/python3 (Debian python3-statsmodels). Writes
-src/test/resources/reference/holm_reference.json: each case holds the raw p-values (inputs) and
-statsmodels.stats.multitest.multipletests(p, method="holm")[1] (adjusted p-values, Holm 1979).
+src/test/resources/reference/holm_reference.json: each case holds the raw p-values (inputs),
+statsmodels.stats.multitest.multipletests(p, method="holm")[1] (adjusted p-values, Holm 1979)
+as "adjusted", and multipletests(p, method="fdr_bh")[1] (Benjamini & Hochberg 1995) as
+"adjusted_bh".
 """
 import json
 import os
@@ -28,7 +30,9 @@ cases = [
 out_cases = []
 for p in cases:
     adjusted = multipletests(p, method="holm")[1]
-    out_cases.append({"p": p, "adjusted": [float(x) for x in adjusted]})
+    adjusted_bh = multipletests(p, method="fdr_bh")[1]
+    out_cases.append({"p": p, "adjusted": [float(x) for x in adjusted],
+                      "adjusted_bh": [float(x) for x in adjusted_bh]})
 
 out = {
     "generated_by": "src/test/reference/holm_reference.py with python %s, numpy %s, statsmodels %s"

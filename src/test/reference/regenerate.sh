@@ -3,6 +3,8 @@
 # Each script prints the library versions it used and writes its JSON under
 # src/test/resources/reference/. A script whose interpreter or libraries are missing is skipped
 # with a message; the exit status is then still 0. A script that fails otherwise makes this fail.
+# The *.py scripts run before the *.R ones: paired_delong_reference.R reads the data
+# paired_reference.py writes.
 cd "$(dirname "$0")" || exit 1
 status=0
 for script in *.py *.R; do

@@ -19,6 +19,7 @@ import org.assay.data.retrieval.RetrievalInput;
 import org.assay.data.retrieval.SentinelRule;
 import org.assay.data.retrieval.TiePolicy;
 import org.assay.metrics.Task;
+import org.assay.stats.MultiplicityMethod;
 
 /**
  * Reads an audit file: the claims file and, per reproduced table row, the predictions and how
@@ -27,6 +28,8 @@ import org.assay.metrics.Task;
  * <pre>
  * claims: claims.yaml
  * margin: 1.0            # percentage points (optional)
+ * multiplicity: holm     # holm (default) or bh (optional)
+ * paired_test: bootstrap # bootstrap (default) or randomization, for compared rows (optional)
  * reproductions:
  *   - table: T2
  *     row: "ChirpNet (ours)"
@@ -55,7 +58,8 @@ import org.assay.metrics.Task;
  *         sentinel: -100             # auto (default), none, or the value</pre>
  */
 public final class AuditFileReader {
-    private static final Set<String> TOP = Set.of("claims", "margin", "reproductions", "templates");
+    private static final Set<String> TOP = Set.of("claims", "margin", "reproductions", "templates", "multiplicity",
+            "paired_test");
     private static final Set<String> REPRO = Set.of("table", "row", "task", "predictions", "manifest", "truth", "positive",
             "columns", "notes", "claim_notes");
     private static final Set<String> GENERATION = Set.of("table", "row", "task", "predictions", "references", "manifest",
@@ -69,10 +73,11 @@ public final class AuditFileReader {
 
     /**
      * The parsed audit file: claims path, reproductions, a margin in points or null, the user's notes,
-     * and the folder of report templates to use (null: the bundled ones).
+     * the folder of report templates to use (null: the bundled ones), and the multiplicity method and
+     * paired test it names (null: not named).
      */
     public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints, UserNotes notes,
-                            Path templates) {}
+                            Path templates, MultiplicityMethod multiplicity, PairedMethod pairedMethod) {}
 
     private AuditFileReader() {}
 
@@ -160,7 +165,23 @@ public final class AuditFileReader {
                         "give the folder 'assay init' wrote (relative to the audit file), or remove the line");
             }
         }
-        return new AuditFile(claims, out, margin, notes, templates);
+        MultiplicityMethod multiplicity = null;
+        if (root.has("multiplicity")) {
+            try {
+                multiplicity = MultiplicityMethod.parse(root.get("multiplicity").asText());
+            } catch (UserInputException e) {
+                throw new UserInputException(file, "/multiplicity", e.problem(), e.fix());
+            }
+        }
+        PairedMethod paired = null;
+        if (root.has("paired_test")) {
+            try {
+                paired = PairedMethod.parse(root.get("paired_test").asText());
+            } catch (UserInputException e) {
+                throw new UserInputException(file, "/paired_test", e.problem(), e.fix());
+            }
+        }
+        return new AuditFile(claims, out, margin, notes, templates, multiplicity, paired);
     }
 
     private static Task task(Path file, String at, String text) {

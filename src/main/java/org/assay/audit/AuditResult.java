@@ -6,7 +6,8 @@ import org.assay.claims.ClaimsFile;
 /**
  * The outcome of an audit: a finding per tested claim, the claims not tested, the inputs with
  * their hashes, the settings, and warnings raised while reading; the user's notes, and per table
- * how its subsample was drawn (what the manifest says), for the replication notes.
+ * how its subsample was drawn (what the manifest says), for the replication notes; the paired
+ * comparisons of reproduced rows, and how p-values were adjusted and compared rows tested.
  */
 public record AuditResult(
         ClaimsFile claims,
@@ -18,7 +19,10 @@ public record AuditResult(
         List<String> warnings,
         org.assay.audit.checks.CheckResult checks,
         UserNotes notes,
-        java.util.Map<String, List<String>> sampling) {
+        java.util.Map<String, List<String>> sampling,
+        List<Comparison> comparisons,
+        org.assay.stats.MultiplicityMethod multiplicity,
+        PairedMethod pairedMethod) {
 
     public long count(Verdict v) { return findings.stream().filter(f -> f.verdict() == v).count(); }
 }

@@ -14,12 +14,13 @@ import org.assay.common.UserInputException;
 import org.assay.data.EvaluationData;
 import org.assay.metrics.MetricRegistry;
 import org.assay.metrics.PreparedMetric;
-import org.assay.stats.Multiplicity;
+import org.assay.stats.MultiplicityMethod;
 
 /**
  * Runs an audit: reads the claims and each reproduction's predictions, computes the evidence
- * for every claim of the reproduced rows, adjusts the p-values across the whole audit (Holm)
- * and assigns the verdicts.
+ * for every claim of the reproduced rows, adjusts the p-values across the whole audit (Holm by
+ * default, Benjamini&ndash;Hochberg on request) and assigns the verdicts; then compares the pairs
+ * of reproduced rows the tables name under {@code compare:} ({@link PairedComparisons}).
  */
 public final class Auditor {
 
@@ -35,11 +36,13 @@ public final class Auditor {
         Set<Claim> audited = new LinkedHashSet<>();
         Map<String, List<String>> sampling = new java.util.LinkedHashMap<>();
         UserNotes notes = request.notes();
+        Map<List<String>, Reproduction.Outputs> reproduced = new java.util.LinkedHashMap<>();
         for (Reproduction r : request.reproductions()) {
             ClaimTable table = selectTable(claims, r);
             if (r.tableId() == null) notes = notes.naming(table.id());
             String row = selectRow(claims, table, r);
             Reproduction.Outputs outputs = r.read();
+            reproduced.put(List.of(table.id(), row), outputs);
             inputs.addAll(outputs.inputs());
             sampling.put(table.id(), sampling(outputs, warnings));
             for (String typo : notes.unmatched(table.id(), table.claims())) {
@@ -106,7 +109,7 @@ public final class Auditor {
                 findings.add(assessor.assess(c, evidence, data.size(), population, margin, tableNotes));
             }
         }
-        List<Finding> adjusted = adjust(findings, assessor);
+        List<Finding> adjusted = adjust(findings, assessor, request.multiplicity());
         List<UnauditedClaim> unaudited = new ArrayList<>();
         for (Claim c : claims.allClaims()) {
             if (!audited.contains(c)) {
@@ -115,8 +118,10 @@ public final class Auditor {
             }
         }
         var checks = new org.assay.audit.checks.ClaimChecker().check(claims);
+        List<Comparison> comparisons = new PairedComparisons(request.settings(), request.pairedMethod(),
+                request.multiplicity()).run(claims, reproduced);
         return new AuditResult(claims, adjusted, unaudited, inputs, request.settings(), request.margin(), warnings, checks,
-                notes, sampling);
+                notes, sampling, comparisons, request.multiplicity(), request.pairedMethod());
     }
 
     /**
@@ -134,15 +139,15 @@ public final class Auditor {
         return out;
     }
 
-    /** Holm's step-down adjustment over every computable claim of the audit (Holm 1979). */
-    private static List<Finding> adjust(List<Finding> findings, ClaimAssessor assessor) {
+    /** The multiplicity adjustment (Holm 1979 by default) over every computable claim of the audit. */
+    private static List<Finding> adjust(List<Finding> findings, ClaimAssessor assessor, MultiplicityMethod method) {
         List<Integer> idx = new ArrayList<>();
         for (int i = 0; i < findings.size(); i++) if (findings.get(i).verdict() != Verdict.NOT_COMPUTABLE) idx.add(i);
         double[] p = new double[idx.size()];
         for (int j = 0; j < p.length; j++) p[j] = findings.get(idx.get(j)).pValue();
-        double[] holm = p.length == 0 ? p : Multiplicity.holm(p);
+        double[] adjustedP = method.adjust(p);
         List<Finding> out = new ArrayList<>(findings);
-        for (int j = 0; j < p.length; j++) out.set(idx.get(j), assessor.withAdjustedP(findings.get(idx.get(j)), holm[j]));
+        for (int j = 0; j < p.length; j++) out.set(idx.get(j), assessor.withAdjustedP(findings.get(idx.get(j)), adjustedP[j]));
         return out;
     }
 

@@ -18,7 +18,7 @@ import org.assay.stats.Interval;
  * @param equivalence    the (1 - 2 alpha) interval used for the two one-sided tests
  * @param rangeIfTrue    where a reproduction of this size would fall if the claim were true
  * @param pValue         two-sided p-value of "the true value lies in the claim's rounding interval"
- * @param adjustedP      the same after Holm's adjustment across the audit
+ * @param adjustedP      the same after the audit's multiplicity adjustment (Holm by default) across its claims
  * @param margin         equivalence margin
  * @param difference     estimate minus the nearest end of the claim's interval (0 when inside)
  * @param itemsToSettle  approximate subsample size at which an inconclusive claim would be settled, or null

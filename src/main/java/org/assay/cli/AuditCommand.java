@@ -9,6 +9,8 @@ import org.assay.audit.AuditFileReader;
 import org.assay.audit.AuditRequest;
 import org.assay.audit.AuditResult;
 import org.assay.audit.Auditor;
+import org.assay.audit.PairedMethod;
+import org.assay.stats.MultiplicityMethod;
 import org.assay.audit.Reproduction;
 import org.assay.metrics.Task;
 import org.assay.common.UserInputException;
@@ -28,8 +30,10 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {"Tests each claim of a results table against your reproduced predictions.",
             "Writes a report (report.md, replication-notes.md, reviewer-comments.md, claims-table.md and report.json; "
                 + "--format adds report.html and claims-table.tex): the reproduced value with its interval, the claim's rounding "
-                + "interval, a p-value (Holm-adjusted across the audit) and a verdict: consistent, "
-                + "inconclusive or discrepant.", ""},
+                + "interval, a p-value (Holm-adjusted across the audit; --multiplicity bh for Benjamini-Hochberg) and a "
+                + "verdict: consistent, inconclusive or discrepant. Pairs of rows named under compare: in the claims file, "
+                + "both reproduced on the same items, are compared: the reproduced gap beside the claimed one, and a "
+                + "paired test of the printed ordering.", ""},
         footer = {"", "Examples:",
             "  assay audit --claims claims.yaml --predictions preds.csv --manifest subsample.txt \\",
             "      --table T2 --row \"ChirpNet (ours)\" --positive 1 --out audit-report",
@@ -41,6 +45,9 @@ import picocli.CommandLine.Model.CommandSpec;
             "  claims: claims.yaml",
             "  reproductions:",
             "    - {table: T2, row: \"ChirpNet (ours)\", predictions: preds.csv, manifest: subsample.txt}",
+            "    - {table: T2, row: \"Baseline CNN\", predictions: baseline.csv, manifest: subsample.txt}",
+            "  multiplicity: holm             # or bh",
+            "  paired_test: bootstrap         # or randomization",
             "",
             "Exit codes: 0 done; 1 done and the --fail-on condition met; 2 bad usage or input; 3 internal error."})
 final class AuditCommand implements Callable<Integer> {
@@ -73,6 +80,16 @@ final class AuditCommand implements Callable<Integer> {
     Double margin;
 
     @Mixin EstimationOptions estimation;
+
+    @Option(names = "--multiplicity", paramLabel = "METHOD",
+            description = "Adjustment of p-values across the audit's claims (and across its compared rows): holm "
+                    + "(family-wise error rate, the default) or bh (Benjamini-Hochberg false discovery rate).")
+    String multiplicity;
+
+    @Option(names = "--paired-test", paramLabel = "METHOD",
+            description = "Test of compared rows (compare: in the claims file) for metrics without an exact or DeLong "
+                    + "paired test: bootstrap (paired bootstrap, the default) or randomization (approximate randomization).")
+    String pairedTest;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "audit-report", description = "Report folder (default ${DEFAULT-VALUE}).")
     Path out;
@@ -129,7 +146,9 @@ final class AuditCommand implements Callable<Integer> {
             AuditFileReader.AuditFile f = AuditFileReader.read(auditFile);
             double m = margin != null ? margin : f.marginPoints() != null ? f.marginPoints() : 1.0;
             templatesFromFile = f.templates();
-            return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100, f.notes());
+            return new AuditRequest(f.claims(), f.reproductions(), estimation.settings(), m / 100, f.notes(),
+                    multiplicity != null ? MultiplicityMethod.parse(multiplicity) : f.multiplicity(),
+                    pairedTest != null ? PairedMethod.parse(pairedTest) : f.pairedMethod());
         }
         Task t = Task.parse(task);
         if (claims == null || (predictions == null && t != Task.RETRIEVAL)) {
@@ -141,6 +160,9 @@ final class AuditCommand implements Callable<Integer> {
                     "audit one direction at a time, or write an audit file with a 'column:' per direction");
         }
         Reproduction r = inputs.reproduction(t, predictions, table, row);
-        return new AuditRequest(claims, List.of(r), estimation.settings(), (margin == null ? 1.0 : margin) / 100);
+        return new AuditRequest(claims, List.of(r), estimation.settings(), (margin == null ? 1.0 : margin) / 100,
+                org.assay.audit.UserNotes.none(),
+                multiplicity == null ? MultiplicityMethod.HOLM : MultiplicityMethod.parse(multiplicity),
+                pairedTest == null ? PairedMethod.BOOTSTRAP : PairedMethod.parse(pairedTest));
     }
 }

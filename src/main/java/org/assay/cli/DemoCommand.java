@@ -72,7 +72,7 @@ final class DemoCommand implements Callable<Integer> {
         AuditFileReader.AuditFile f = AuditFileReader.read(inputDir.resolve("audit.yaml"));
         double margin = f.marginPoints() == null ? 1.0 : f.marginPoints();
         AuditResult result = new Auditor().run(new AuditRequest(f.claims(), f.reproductions(), estimation.settings(),
-                margin / 100, f.notes()));
+                margin / 100, f.notes(), f.multiplicity(), f.pairedMethod()));
         Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
                 report.templates(f.templates()));
         var written = new OutputDirectory(out, force).write(files);

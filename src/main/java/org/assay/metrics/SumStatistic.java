@@ -19,6 +19,16 @@ public final class SumStatistic implements Resampled {
 
     public UnitTable table() { return table; }
 
+    /** The function of the summed statistics. */
+    public SumMetric metric() { return metric; }
+
+    /** The statistic on unit {@code i} alone: for a count metric, that unit's 0/1 outcome. */
+    public double unitValue(int i) {
+        double[] sums = new double[table.width()];
+        table.addUnit(i, 1, sums);
+        return metric.value(sums);
+    }
+
     @Override public int units() { return table.units(); }
 
     @Override public double estimate() { return metric.value(table.weightedSums(null)); }

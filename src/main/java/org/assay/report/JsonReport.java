@@ -6,12 +6,15 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.assay.audit.AuditResult;
+import org.assay.audit.Comparison;
+import org.assay.audit.ComparisonVerdict;
 import org.assay.audit.Finding;
 import org.assay.audit.InputFile;
 import org.assay.audit.UnauditedClaim;
 import org.assay.audit.Verdict;
 import org.assay.claims.Claim;
 import org.assay.stats.Interval;
+import org.assay.stats.MultiplicityMethod;
 
 /**
  * report.json: the audit for machines. The schema is documented in DEVELOPERS.md
@@ -37,7 +40,8 @@ public final class JsonReport {
         s.put("resamples", r.settings().resamples());
         s.put("seed", r.settings().seed());
         s.put("margin", r.margin());
-        s.put("multiplicity", "holm");
+        s.put("multiplicity", r.multiplicity().id());
+        s.put("paired_test", r.pairedMethod().id());
         ObjectNode source = root.putObject("source");
         source.put("title", r.claims().title());
         source.put("document", r.claims().document());
@@ -52,13 +56,15 @@ public final class JsonReport {
         ObjectNode counts = root.putObject("counts");
         for (Verdict v : Verdict.values()) counts.put(v.word(), r.count(v));
         ArrayNode findings = root.putArray("findings");
-        for (Finding f : r.findings()) findings.add(finding(f));
+        for (Finding f : r.findings()) findings.add(finding(f, r.multiplicity()));
         ArrayNode unaudited = root.putArray("unaudited");
         for (UnauditedClaim u : r.unaudited()) {
             ObjectNode o = claim(u.claim());
             o.put("reason", u.reason());
             unaudited.add(o);
         }
+        ArrayNode comparisons = root.putArray("comparisons");
+        for (Comparison c : r.comparisons()) comparisons.add(comparison(c));
         root.set("checks", CheckReport.findings(r.checks()));
         ArrayNode warnings = root.putArray("warnings");
         r.warnings().forEach(warnings::add);
@@ -103,7 +109,7 @@ public final class JsonReport {
         return o;
     }
 
-    private static ObjectNode finding(Finding f) {
+    private static ObjectNode finding(Finding f, MultiplicityMethod multiplicity) {
         ObjectNode o = claim(f.claim());
         o.put("verdict", f.verdict().word());
         ArrayNode ci = o.putArray("claim_interval");
@@ -122,7 +128,9 @@ public final class JsonReport {
         num(range, f.rangeIfTrue()[0]);
         num(range, f.rangeIfTrue()[1]);
         num(o, "p_value", f.pValue());
-        num(o, "holm_p_value", f.adjustedP());
+        num(o, "adjusted_p_value", f.adjustedP());
+        // kept for readers of earlier reports: the Holm value, null when another method was chosen
+        num(o, "holm_p_value", multiplicity == MultiplicityMethod.HOLM ? f.adjustedP() : Double.NaN);
         num(o, "margin", f.margin());
         num(o, "difference", f.difference());
         o.put("direction", f.direction());
@@ -136,6 +144,51 @@ public final class JsonReport {
             ArrayNode counts = h.putArray("counts");
             for (int c : f.histogram().counts()) counts.add(c);
         }
+        return o;
+    }
+
+    /** One compared pair of rows on one column: the claimed gap beside the reproduced one. */
+    private static ObjectNode comparison(Comparison c) {
+        ObjectNode o = JSON.createObjectNode();
+        Claim a = c.claimA();
+        o.put("table", a.tableId());
+        ArrayNode rows = o.putArray("rows");
+        rows.add(a.row());
+        rows.add(c.claimB().row());
+        ArrayNode col = o.putArray("column");
+        a.column().forEach(col::add);
+        o.put("metric", a.metric());
+        ObjectNode params = o.putObject("params");
+        a.params().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
+                .forEach(e -> params.put(e.getKey(), e.getValue()));
+        ArrayNode printed = o.putArray("printed");
+        printed.add(a.value().text());
+        printed.add(c.claimB().value().text());
+        o.put("scale", a.scale().id());
+        num(o, "claimed_gap", c.printedGap());
+        ArrayNode claimed = o.putArray("claimed_gap_interval");
+        num(claimed, c.claimedLower());
+        num(claimed, c.claimedUpper());
+        o.put("verdict", c.verdict().word());
+        if (c.verdict() == ComparisonVerdict.NOT_COMPUTABLE) {
+            o.put("reason", c.reason());
+            return o;
+        }
+        o.put("n", c.n());
+        if (c.population() == null) o.putNull("test_size"); else o.put("test_size", c.population());
+        num(o, "reproduced_gap", c.gap());
+        o.set("interval", interval(c.interval()));
+        o.put("claimed_gap_in_interval", c.claimedGapInInterval());
+        o.put("method", c.test());
+        num(o, "p_value", c.pValue());
+        num(o, "adjusted_p_value", c.adjustedP());
+        if (c.discordant() != null) {
+            ObjectNode d = o.putObject("discordant");
+            d.put("first_only", c.discordant()[0]);
+            d.put("second_only", c.discordant()[1]);
+        }
+        ArrayNode notes = o.putArray("notes");
+        c.notes().forEach(notes::add);
         return o;
     }
 

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.assay.audit.AuditResult;
+import org.assay.audit.Comparison;
+import org.assay.audit.ComparisonVerdict;
 import org.assay.audit.Finding;
 import org.assay.audit.InputFile;
 import org.assay.audit.UnauditedClaim;
@@ -15,6 +17,7 @@ import org.assay.audit.checks.CheckResult;
 import org.assay.claims.Claim;
 import org.assay.claims.ClaimTable;
 import org.assay.claims.Scale;
+import org.assay.stats.MultiplicityMethod;
 
 /**
  * The data the report templates see: plain maps, lists, strings and booleans, every number already
@@ -39,7 +42,15 @@ public final class ReportModel {
         m.put("resamples", String.valueOf(r.settings().resamples()));
         m.put("seed", String.valueOf(r.settings().seed()));
         long tested = r.findings().stream().filter(f -> f.verdict() != Verdict.NOT_COMPUTABLE).count();
-        m.put("multiplicity", "Holm across " + tested + " claim" + (tested == 1 ? "" : "s"));
+        MultiplicityMethod method = r.multiplicity();
+        long compared = r.comparisons().stream().filter(c -> c.verdict() != ComparisonVerdict.NOT_COMPUTABLE).count();
+        m.put("multiplicity", method.title() + " across " + tested + " claim" + (tested == 1 ? "" : "s")
+                + (compared == 0 ? "" : "; " + method.title() + " across " + compared + " compared pair"
+                        + (compared == 1 ? "" : "s") + " of rows, separately"));
+        m.put("multiplicity_method", method.title());
+        m.put("adjusted_p_label", adjustedLabel(method) + " p");
+        m.put("paired_test", r.pairedMethod().id());
+        m.put("has_comparisons", !r.comparisons().isEmpty());
 
         List<Map<String, Object>> counts = new ArrayList<>();
         for (Verdict v : Verdict.values()) {
@@ -78,7 +89,8 @@ public final class ReportModel {
                     + " test items gives " + Display.value(c, f.estimate()) + " (" + Display.percent(f.interval().confidence())
                     + " interval " + Display.range(c, f.interval().lower(), f.interval().upper()) + ", "
                     + f.interval().method() + "), " + Display.difference(c, f.difference()) + " " + f.direction()
-                    + " the printed value's rounding interval (Holm-adjusted p = " + Display.p(f.adjustedP()) + ").";
+                    + " the printed value's rounding interval (" + adjustedLabel(method) + "-adjusted p = "
+                    + Display.p(f.adjustedP()) + ").";
             deviations.add(Map.of("text", text, "number", String.valueOf(deviations.size() + 1)));
         }
         m.put("deviations", deviations);
@@ -126,7 +138,82 @@ public final class ReportModel {
         List<Map<String, Object>> claims = new ArrayList<>();
         for (Finding f : fs) claims.add(finding(r, f, shared));
         m.put("claims", claims);
+        List<Map<String, Object>> comparisons = new ArrayList<>();
+        for (Comparison c : r.comparisons()) if (c.tableId().equals(t.id())) comparisons.add(comparison(c, r.multiplicity()));
+        m.put("comparisons", comparisons);
+        m.put("has_comparisons", !comparisons.isEmpty());
         return m;
+    }
+
+    /** "Holm" or "BH", as in "Holm p" and "BH-adjusted p". */
+    static String adjustedLabel(MultiplicityMethod method) {
+        return method == MultiplicityMethod.HOLM ? "Holm" : "BH";
+    }
+
+    /** One compared pair of rows on one column, every number on the first claim's printed scale. */
+    private static Map<String, Object> comparison(Comparison c, MultiplicityMethod method) {
+        Claim a = c.claimA();
+        Claim b = c.claimB();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("rows", a.row() + " − " + b.row());
+        m.put("row_a", a.row());
+        m.put("row_b", b.row());
+        m.put("column", String.join(" / ", a.column()));
+        m.put("metric", metricLabel(a));
+        m.put("printed_a", a.value().text() + (a.scale() == Scale.PERCENT ? "%" : ""));
+        m.put("printed_b", b.value().text() + (b.scale() == Scale.PERCENT ? "%" : ""));
+        m.put("claimed_gap", signed(a, c.printedGap()));
+        m.put("claimed_gap_interval", "[" + signed(a, c.claimedLower()) + ", " + signed(a, c.claimedUpper()) + "]");
+        ComparisonVerdict v = c.verdict();
+        m.put("verdict", v.word());
+        m.put("computed", v != ComparisonVerdict.NOT_COMPUTABLE);
+        if (v == ComparisonVerdict.NOT_COMPUTABLE) {
+            m.put("reason", c.reason());
+            m.put("summary", "could not be computed: " + c.reason());
+            m.put("notes", List.of());
+            return m;
+        }
+        m.put("reason", "");
+        m.put("gap", signed(a, c.gap()));
+        m.put("gap_interval", "[" + signed(a, c.interval().lower()) + ", " + signed(a, c.interval().upper()) + "]");
+        m.put("interval_method", c.interval().method());
+        m.put("test", c.test());
+        m.put("p", Display.p(c.pValue()));
+        m.put("adjusted_p", Display.p(c.adjustedP()));
+        m.put("n", String.valueOf(c.n()));
+        m.put("summary", comparisonSummary(c, method));
+        m.put("notes", c.notes());
+        return m;
+    }
+
+    /** What a comparison found, in sentences (no markup). */
+    static String comparisonSummary(Comparison c, MultiplicityMethod method) {
+        Claim a = c.claimA();
+        StringBuilder sb = new StringBuilder("The table prints ").append(a.value().text()).append(" against ")
+                .append(c.claimB().value().text()).append(", a gap of ").append(signed(a, c.printedGap()))
+                .append(" (rounding interval [").append(signed(a, c.claimedLower())).append(", ")
+                .append(signed(a, c.claimedUpper())).append("]); on the same ").append(c.n())
+                .append(" items the reproduced gap is ").append(signed(a, c.gap())).append(" (")
+                .append(Display.percent(c.interval().confidence())).append(" interval [").append(signed(a, c.interval().lower()))
+                .append(", ").append(signed(a, c.interval().upper())).append("], ").append(c.interval().method()).append("), ")
+                .append(c.claimedGapInInterval() ? "which the claimed gap meets" : "which the claimed gap lies outside of")
+                .append(". Test: ").append(c.test()).append(", p = ").append(Display.p(c.pValue())).append("; ")
+                .append(adjustedLabel(method)).append("-adjusted p = ").append(Display.p(c.adjustedP())).append(": ");
+        sb.append(switch (c.verdict()) {
+            case ORDERING_REPLICATED -> "the printed ordering is replicated.";
+            case ORDERING_REVERSED -> "the reproduction shows the opposite ordering.";
+            case ORDERING_NOT_SHOWN -> "these items do not show which row is ahead.";
+            case NO_ORDERING_CLAIMED -> "the printed values are equal, so no ordering is claimed.";
+            case NOT_COMPUTABLE -> "";
+        });
+        return sb.toString();
+    }
+
+    /** A gap on the claim's printed scale with its sign: "+5.80 points", "-0.250". */
+    static String signed(Claim c, double fraction) {
+        String v = Display.value(c, fraction);
+        if (!v.startsWith("-")) v = "+" + v;
+        return c.scale() == Scale.PERCENT ? v + " points" : v;
     }
 
     private static Map<String, Object> claim(Claim c) {
@@ -171,14 +258,14 @@ public final class ReportModel {
         m.put("interval_method", f.interval().method());
         m.put("range_if_true", Display.range(c, f.rangeIfTrue()[0], f.rangeIfTrue()[1]));
         m.put("p", Display.p(f.pValue()));
-        m.put("holm_p", Display.p(f.adjustedP()));
+        m.put("holm_p", Display.p(f.adjustedP()));   // the adjusted p-value, whatever the method (the key predates bh)
         m.put("n", String.valueOf(f.n()));
         m.put("test_size", f.population() == null ? "?" : String.valueOf(f.population()));
         m.put("n_of_test_size", f.n() + " of " + (f.population() == null ? "?" : f.population()));
         m.put("difference", f.direction().equals("within") ? "inside the rounding interval"
                 : Display.difference(c, f.difference()) + " " + f.direction());
         m.put("direction", f.direction());
-        m.put("summary", summary(f));
+        m.put("summary", summary(f, r.multiplicity()));
         m.put("own_notes", f.notes().stream().filter(n -> !shared.contains(n)).toList());
         return m;
     }
@@ -194,7 +281,7 @@ public final class ReportModel {
     }
 
     /** What the audit found for one claim, in sentences (no markup). */
-    static String summary(Finding f) {
+    static String summary(Finding f, MultiplicityMethod method) {
         Claim c = f.claim();
         StringBuilder sb = new StringBuilder("reproduced ").append(Display.value(c, f.estimate()));
         if (f.direction().equals("within")) {
@@ -205,7 +292,8 @@ public final class ReportModel {
         }
         sb.append(". ");
         switch (f.verdict()) {
-            case DISCREPANT -> sb.append("The claim lies outside what this reproduction allows (Holm-adjusted p = ")
+            case DISCREPANT -> sb.append("The claim lies outside what this reproduction allows (")
+                    .append(adjustedLabel(method)).append("-adjusted p = ")
                     .append(Display.p(f.adjustedP())).append("): the reproduced value is ").append(f.direction())
                     .append(" the claim.");
             case CONSISTENT -> sb.append("Agreement within ").append(Display.difference(c, f.margin()))

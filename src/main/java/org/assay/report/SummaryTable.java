@@ -2,6 +2,8 @@ package org.assay.report;
 
 import java.util.Locale;
 import org.assay.audit.AuditResult;
+import org.assay.audit.Comparison;
+import org.assay.audit.ComparisonVerdict;
 import org.assay.audit.Finding;
 import org.assay.audit.Verdict;
 import org.assay.claims.Claim;
@@ -30,7 +32,18 @@ public final class SummaryTable {
                 r.count(Verdict.INCONCLUSIVE), r.count(Verdict.DISCREPANT)));
         if (r.count(Verdict.NOT_COMPUTABLE) > 0) sb.append(", ").append(r.count(Verdict.NOT_COMPUTABLE)).append(" not computable");
         if (!r.unaudited().isEmpty()) sb.append(", ").append(r.unaudited().size()).append(" not audited");
-        return sb.append('\n').toString();
+        sb.append('\n');
+        if (!r.comparisons().isEmpty()) {
+            sb.append(String.format(Locale.ROOT, "%ncompared rows (first - second)%n"));
+            for (Comparison c : r.comparisons()) {
+                Claim a = c.claimA();
+                String gap = c.verdict() == ComparisonVerdict.NOT_COMPUTABLE ? "n/a" : ReportModel.signed(a, c.gap());
+                sb.append(String.format(Locale.ROOT, "%s: %s - %s / %s  printed gap %s, reproduced %s  %s%n", a.tableId(),
+                        a.row(), c.claimB().row(), String.join(" / ", a.column()), ReportModel.signed(a, c.printedGap()),
+                        gap, c.verdict().word()));
+            }
+        }
+        return sb.toString();
     }
 
     /** The metric id with its parameters (recall_at_k:k=5), as --metric takes it. */
