@@ -74,6 +74,9 @@ final class CountPlanCurves implements PlanCurves {
     @Override
     public boolean zigzags() { return true; }
 
+    /** The exact tests, for the check that their regions are the audit's verdicts. */
+    ExactCountPlan exact() { return exact; }
+
     Long lowerCount() { return lowerCount; }
 
     Long higherCount() { return higherCount; }
