@@ -64,7 +64,7 @@ public final class PlanReport {
         StringBuilder sb = new StringBuilder();
         sb.append("Plan for table ").append(result.table()).append(": power ").append(number(s.power())).append(", alpha ")
                 .append(number(s.alpha())).append(", direction ").append(s.direction().id())
-                .append(", margin ±").append(number(s.margin() * 100)).append(" points unless a claim sets its own\n\n");
+                .append(", margin ±").append(points(s.margin())).append(" unless a claim sets its own\n\n");
         List<String[]> cells = new ArrayList<>();
         cells.add(new String[] {"claim", "printed", "N", "method", "(a) interval", "(b) detect", "(c) agree", "n"});
         for (ClaimPlan p : result.plans()) {
@@ -272,6 +272,12 @@ public final class PlanReport {
     private static String margin(Claim c, double fraction) {
         String v = clean(fraction * c.scale().factor());
         if (c.scale() != Scale.PERCENT) return v;
+        return v + (v.equals("1") ? " point" : " points");
+    }
+
+    /** A default margin in percentage points, as --margin takes it. */
+    private static String points(double fraction) {
+        String v = clean(fraction * 100);
         return v + (v.equals("1") ? " point" : " points");
     }
 
