@@ -24,7 +24,8 @@ public record PlanSettings(double margin, double power, double confidence, PlanD
                     "use for example --confidence 0.95 (or --alpha 0.05)");
         }
         if (!(power > 1 - confidence && power < 1)) {
-            throw UserInputException.usage("power " + power + " must lie between alpha " + alpha(confidence) + " and 1",
+            throw UserInputException.usage("power " + power + " must lie between alpha "
+                    + Math.round(alpha(confidence) * 1e6) / 1e6 + " and 1",
                     "use for example --power 0.8");
         }
         sizes = sizes == null ? java.util.List.of() : java.util.List.copyOf(sizes);
