@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
                 + "per-example predictions with an interval, and says claim by claim whether your "
                 + "reproduction is consistent with the printed value.",
             ""},
-        subcommands = {AuditCommand.class, CheckCommand.class, ExtractCommand.class, MeasureCommand.class, SampleCommand.class, InitCommand.class,
+        subcommands = {AuditCommand.class, CheckCommand.class, ExtractCommand.class, MeasureCommand.class, PlanCommand.class, SampleCommand.class, InitCommand.class,
                 DemoCommand.class,
                 CommandLine.HelpCommand.class},
         footer = {"", "Run 'assay COMMAND --help' for a command's options and examples."})
@@ -39,7 +39,7 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "name a command (audit, check, extract, measure, sample, init, demo)");
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command (audit, check, extract, measure, plan, sample, init, demo)");
     }
 
     public static void main(String[] args) {

@@ -26,10 +26,22 @@ public final class HanleyMcNeil {
         PowerChecks.proportion("ROC AUC", auc);
         PowerChecks.items("number of positives", positives);
         PowerChecks.items("number of negatives", negatives);
+        return standardError(auc, (double) positives, (double) negatives);
+    }
+
+    /**
+     * The same formula at class sizes that need not be whole numbers: the expected class sizes of
+     * a random subsample, for planning. Both must be at least 1.
+     */
+    public static double standardError(double auc, double positives, double negatives) {
+        PowerChecks.proportion("ROC AUC", auc);
+        if (!(positives >= 1 && negatives >= 1)) {
+            throw new IllegalArgumentException("need at least one positive and one negative, got " + positives + ", " + negatives);
+        }
         // Q1 - A^2 and Q2 - A^2 in factored form: the same algebra, but no cancellation near 0 or 1.
         double q1MinusA2 = auc * (1 - auc) * (1 - auc) / (2 - auc);
         double q2MinusA2 = auc * auc * (1 - auc) / (1 + auc);
         double numerator = auc * (1 - auc) + (positives - 1) * q1MinusA2 + (negatives - 1) * q2MinusA2;
-        return Math.sqrt(numerator / ((double) positives * negatives));
+        return Math.sqrt(numerator / (positives * negatives));
     }
 }
