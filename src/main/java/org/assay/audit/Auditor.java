@@ -27,6 +27,7 @@ public final class Auditor {
         ClaimsFile claims = ClaimsReader.read(request.claims());
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(InputFile.of("claims", request.claims()));
+        inputs.get(0).sha256();   // hashed as read (InputFile hashes lazily)
         List<String> warnings = new ArrayList<>();
         Estimator estimator = new Estimator(request.settings());
         ClaimAssessor assessor = new ClaimAssessor(request.settings());
@@ -40,6 +41,7 @@ public final class Auditor {
             if (r.tableId() == null) notes = notes.naming(table.id());
             String row = selectRow(claims, table, r);
             Reproduction.Outputs outputs = r.read();
+            outputs.inputs().forEach(InputFile::sha256);   // the report describes the files as they were read
             inputs.addAll(outputs.inputs());
             sampling.put(table.id(), sampling(outputs));
             for (String typo : notes.unmatched(table.id(), table.claims())) {
