@@ -15,7 +15,9 @@
 # Data is invented and seeded (generate.py) and written once per workload; nothing is committed.
 # The reference scripts are reference.py (computation) and summarize.py (the table and the checks).
 # Run it on an otherwise idle machine: the whole default run takes about half an hour on 2 cores, most
-# of it in the reference's bootstraps.
+# of it in the reference's bootstraps. CPU time (user + system) is printed beside the wall time: it is
+# less disturbed by other work on the machine, and it shows what assay's threads cost (the reference
+# runs on one core, assay on all of them).
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
 root="$(cd "$here/../.." && pwd)"
@@ -54,11 +56,13 @@ timed() {
     if ! /usr/bin/time -v -o "$work/time.txt" "$@" > "$out" 2> "$work/stderr.txt"; then
         echo "compare.sh: $name ($side) failed:" >&2; cat "$work/stderr.txt" "$work/time.txt" >&2; exit 3
     fi
-    local wall rss
+    local wall rss cpu
     wall=$(sed -n 's/.*Elapsed (wall clock) time.*: //p' "$work/time.txt")
     rss=$(sed -n 's/.*Maximum resident set size (kbytes): //p' "$work/time.txt")
-    printf '%s\t%s\t%s\t%s\t%s\n' "$name" "$side" "$rep" "$wall" "$rss" >> "$work/runs.tsv"
-    printf '  %-18s %-9s rep %s: %s, %s KB\n' "$name" "$side" "$rep" "$wall" "$rss" >&2
+    cpu=$(awk -F': ' '/User time|System time/ {s += $2} END {print s}' "$work/time.txt")
+    printf '%s\t%s\t%s\t%s\t%s\t%s\n' "$name" "$side" "$rep" "$wall" "$rss" "$cpu" >> "$work/runs.tsv"
+    printf '  %-18s %-9s rep %s: %s wall, %s s CPU, %s KB, load %s\n' "$name" "$side" "$rep" "$wall" "$cpu" "$rss" \
+        "$(cut -d' ' -f1 /proc/loadavg)" >&2
 }
 
 # pair NAME ASSAY_ARGS REFERENCE_CMD: REPS alternating runs of assay and the reference

@@ -65,22 +65,25 @@ def main():
     work = sys.argv[1]
     runs = {}
     with open(os.path.join(work, "runs.tsv"), encoding="utf-8") as f:
-        for name, side, _rep, wall, rss in csv.reader(f, delimiter="\t"):
-            runs.setdefault((name, side), []).append((seconds(wall), int(rss)))
+        for name, side, _rep, wall, rss, cpu in csv.reader(f, delimiter="\t"):
+            runs.setdefault((name, side), []).append((seconds(wall), int(rss), float(cpu)))
     with open(os.path.join(work, "workloads.tsv"), encoding="utf-8") as f:
         workloads = list(csv.reader(f, delimiter="\t"))
     all_ok = True
     print()
-    print("| workload | assay s | reference s | ratio | assay peak MB | reference peak MB | assay result | reference result | agree |")
-    print("|---|---|---|---|---|---|---|---|---|")
+    print("| workload | assay s | reference s | ratio | CPU s assay / reference (ratio) | assay peak MB | reference peak MB "
+          "| assay result | reference result | agree |")
+    print("|---|---|---|---|---|---|---|---|---|---|")
     notes = []
     for name, b_assay, b_ref, per_resample, check_a, check_r, text in workloads:
         a_runs = runs.get((name, "assay"), [])
         r_runs = runs.get((name, "reference"), [])
-        ta = statistics.median(t for t, _ in a_runs)
-        ma = max(m for _, m in a_runs) / 1024
-        tr = statistics.median(t for t, _ in r_runs) if r_runs else None
-        mr = max(m for _, m in r_runs) / 1024 if r_runs else None
+        ta = statistics.median(t for t, _, _ in a_runs)
+        ca = statistics.median(c for _, _, c in a_runs)
+        ma = max(m for _, m, _ in a_runs) / 1024
+        tr = statistics.median(t for t, _, _ in r_runs) if r_runs else None
+        cr = statistics.median(c for _, _, c in r_runs) if r_runs else None
+        mr = max(m for _, m, _ in r_runs) / 1024 if r_runs else None
         if tr is None:
             ratio = "-"
         elif per_resample == "yes":
@@ -88,6 +91,7 @@ def main():
             ratio = f"{pr / pa:.0f}× per resample ({pa * 1000:.2f} vs {pr * 1000:.0f} ms)"
         else:
             ratio = f"{tr / ta:.1f}×" if tr >= ta else f"{tr / ta:.2f}× (assay slower)"
+        cpu_ratio = "-" if cr is None or per_resample == "yes" else f"{cr / ca:.1f}×" if cr >= ca else f"{cr / ca:.2f}×"
         ra = assay_results(os.path.join(work, "out", check_a))
         rr = reference_results(os.path.join(work, "out", check_r))
         cells_a, cells_r, verdicts = [], [], []
@@ -103,7 +107,8 @@ def main():
             all_ok &= ok
             verdicts.append("yes" if ok else "NO")
             notes.append(f"{name} {metric}: {'agree' if ok else 'DISAGREE'}: {why}; {x['method']} vs {y['method']}")
-        print(f"| {name} | {ta:.2f} | {'-' if tr is None else f'{tr:.2f}'} | {ratio} | {ma:.0f} | "
+        cpu_cell = f"{ca:.2f}" + ("" if cr is None else f" / {cr:.2f} ({cpu_ratio})")
+        print(f"| {name} | {ta:.2f} | {'-' if tr is None else f'{tr:.2f}'} | {ratio} | {cpu_cell} | {ma:.0f} | "
               f"{'-' if mr is None else f'{mr:.0f}'} | {'<br>'.join(cells_a)} | {'<br>'.join(cells_r)} | "
               f"{', '.join(verdicts)} |")
         notes.append(f"{name}: {text}; {len(a_runs)} assay runs, {len(r_runs)} reference runs, medians")
