@@ -40,6 +40,9 @@ else
     work="$(mktemp -d "${TMPDIR:-/tmp}/assay-compare.XXXXXX")"
     trap 'rm -rf "$work"' EXIT
 fi
+if [[ "$work$here" == *" "* ]]; then   # the command lines below are split on spaces
+    echo "compare.sh: the checkout and BENCH_DIR/TMPDIR must not contain spaces" >&2; exit 2
+fi
 mkdir -p "$work/out"
 : > "$work/runs.tsv"
 : > "$work/workloads.tsv"
