@@ -28,6 +28,7 @@ public final class Auditor {
         ClaimsFile claims = ClaimsReader.read(request.claims());
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(InputFile.of("claims", request.claims()));
+        inputs.get(0).sha256();   // hashed as read (InputFile hashes lazily)
         List<String> warnings = new ArrayList<>();
         Estimator estimator = new Estimator(request.settings());
         ClaimAssessor assessor = new ClaimAssessor(request.settings());
@@ -43,6 +44,7 @@ public final class Auditor {
             String row = selectRow(claims, table, r);
             Reproduction.Outputs outputs = r.read();
             reproduced.put(List.of(table.id(), row), outputs);
+            outputs.inputs().forEach(InputFile::sha256);   // the report describes the files as they were read
             inputs.addAll(outputs.inputs());
             sampling.put(table.id(), sampling(outputs, warnings));
             for (String typo : notes.unmatched(table.id(), table.claims())) {

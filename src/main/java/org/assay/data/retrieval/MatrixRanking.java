@@ -46,8 +46,7 @@ public final class MatrixRanking {
         if (side == Side.ROWS) {
             matrix.scan((r, s) -> {
                 counts.target(r, s);
-                for (double v : s) counts.observe(r, v);
-                counts.noteGlobal(s);
+                counts.observeRow(r, s);
             });
         } else {
             int[][] asRelevantTo = relevance.transposed().relevant();   // row -> columns it is relevant to
@@ -124,6 +123,38 @@ public final class MatrixRanking {
 
         void noteGlobal(double[] row) {
             for (double v : row) if (v < globalMin) globalMin = v;
+        }
+
+        /**
+         * {@link #observe} for every score of query q's row, and the row's minimum into the global one,
+         * with the query's state in locals. A score below every relevant score (most of a row, for a
+         * useful model) costs one comparison before the minimum's.
+         */
+        void observeRow(int q, double[] row) {
+            double[] t = targets[q];
+            long[] above = higher[q];
+            long[] same = equal[q];
+            double lowest = Double.POSITIVE_INFINITY;
+            for (double x : t) if (x < lowest) lowest = x;
+            double m = min[q];
+            long mCount = minCount[q];
+            for (double v : row) {
+                if (v >= lowest) {
+                    for (int i = 0; i < t.length; i++) {
+                        if (v > t[i]) above[i]++;
+                        else if (v == t[i]) same[i]++;
+                    }
+                }
+                if (v < m) {
+                    m = v;
+                    mCount = 1;
+                } else if (v == m) {
+                    mCount++;
+                }
+            }
+            min[q] = m;
+            minCount[q] = mCount;
+            if (m < globalMin) globalMin = m;
         }
 
         void observe(int q, double v) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.stream.IntStream;
 import org.assay.data.generation.GenerationData;
 
 /** The parameters of corpus and sentence BLEU, read once, and the per-item counts they give. */
@@ -20,16 +21,20 @@ record BleuSettings(Tokenizer tokenizer, boolean lowercase, BleuSmoothing smooth
         return new BleuSettings(Tokenizer.parse(tokenize), lowercase, BleuSmoothing.of(smoothing), order);
     }
 
-    /** Every item tokenized once and reduced to its {@link BleuCounts} row. */
+    /**
+     * Every item tokenized once and reduced to its {@link BleuCounts} row. Items are independent and
+     * each writes only its own row, so they are counted in parallel (the common fork-join pool) with
+     * the same result in any order; tokenizing and counting n-grams is most of a large corpus's time.
+     */
     CountTable counts(GenerationData data) {
         int width = BleuCounts.width(order);
         int[] all = new int[data.size() * width];
-        for (int i = 0; i < data.size(); i++) {
+        IntStream.range(0, data.size()).parallel().forEach(i -> {
             List<String> hyp = tokenizer.tokens(data.hypotheses().get(i), lowercase);
             List<List<String>> refs = new ArrayList<>();
             for (String r : data.references().get(i)) refs.add(tokenizer.tokens(r, lowercase));
             System.arraycopy(BleuCounts.of(hyp, refs, order), 0, all, i * width, width);
-        }
+        });
         return new CountTable(all, width);
     }
 

@@ -29,4 +29,24 @@ final class CountTable implements UnitTable {
         int at = i * width;
         for (int c = 0; c < width; c++) sums[c] += weight * counts[at + c];
     }
+
+    /**
+     * The same sums as the default (unit by unit through {@link #addUnit}), in one pass over the
+     * rows with whole-number arithmetic: this is a bootstrap resample's whole cost for BLEU, and the
+     * per-unit calls were most of it. Exact: the long sums equal the double sums of the default
+     * whenever those are exact (below 2^53).
+     */
+    @Override
+    public double[] weightedSums(int[] weights) {
+        long[] sums = new long[width];
+        int n = units();
+        for (int i = 0, at = 0; i < n; i++, at += width) {
+            long w = weights == null ? 1 : weights[i];
+            if (w == 0) continue;
+            for (int c = 0; c < width; c++) sums[c] += w * counts[at + c];
+        }
+        double[] out = new double[width];
+        for (int c = 0; c < width; c++) out[c] = sums[c];
+        return out;
+    }
 }

@@ -13,9 +13,14 @@ final class Ngrams {
      * space. Tokens never hold whitespace (every tokenizer splits on it), so the key is unambiguous.
      */
     static Map<String, Integer> ofTokens(List<String> tokens, int n) {
-        Map<String, Integer> counts = new HashMap<>();
-        for (int i = 0; i + n <= tokens.size(); i++) {
-            counts.merge(String.join(" ", tokens.subList(i, i + n)), 1, Integer::sum);
+        int grams = total(tokens.size(), n);
+        Map<String, Integer> counts = new HashMap<>(Math.max(16, 2 * grams));   // sized once: no rehashing
+        StringBuilder key = new StringBuilder();
+        for (int i = 0; i < grams; i++) {
+            key.setLength(0);
+            key.append(tokens.get(i));
+            for (int k = 1; k < n; k++) key.append(' ').append(tokens.get(i + k));
+            counts.merge(key.toString(), 1, Integer::sum);
         }
         return counts;
     }
