@@ -32,7 +32,7 @@ public record GenerationReproduction(String tableId, String row, Path outputs, L
             inputs.add(InputFile.of("references " + (i + 1) + where, references.get(i)));
         }
         if (manifest != null) {
-            Manifest.read(manifest).checkCovers(outputs, data.ids());
+            Manifest.checkCovers(manifest, outputs, data.ids());
             inputs.add(InputFile.of("manifest" + where, manifest));
         }
         String what = data.size() + " items" + (references.isEmpty() ? "" : ", " + references.size() + " reference files");

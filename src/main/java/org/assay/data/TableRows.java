@@ -68,6 +68,9 @@ public final class TableRows implements AutoCloseable {
         return id;
     }
 
+    /** The ids accepted by {@link #uniqueId} so far, in order (a compact list, decoded on access). */
+    public List<String> ids() { return ids.ids(); }
+
     @Override
     public void close() { rows.close(); }
 }

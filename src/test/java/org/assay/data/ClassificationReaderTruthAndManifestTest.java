@@ -67,7 +67,7 @@ class ClassificationReaderTruthAndManifestTest {
     void manifestCommentsAreKeptAndBlankLinesIgnored() {
         Manifest manifest = Manifest.read(resource("manifest.txt"));
         assertThat(manifest.comments()).containsExactly("# seed: 42", "# method: simple random sample without replacement");
-        assertThat(manifest.ids().toArray()).containsExactly("t1", "t3", "t5");
+        assertThat(manifest.ids().ids()).containsExactly("t1", "t3", "t5");
         assertThat(manifest.ids().line(2)).isEqualTo(7);   // t5 is on file line 7 after a blank line
     }
 

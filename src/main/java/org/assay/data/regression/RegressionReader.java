@@ -1,9 +1,7 @@
 package org.assay.data.regression;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.math3.util.ResizableDoubleArray;
+import org.assay.data.DoubleColumn;
 import org.assay.data.TableRows;
 
 /**
@@ -24,15 +22,14 @@ public final class RegressionReader {
             int prediction = rows.requireColumn(columns.prediction(), "the predicted values",
                     "set --prediction-column to the column that holds the predicted values");
             rows.requireFirstRow();
-            List<String> ids = new ArrayList<>();
-            ResizableDoubleArray truth = new ResizableDoubleArray();
-            ResizableDoubleArray predicted = new ResizableDoubleArray();
+            DoubleColumn truth = new DoubleColumn();
+            DoubleColumn predicted = new DoubleColumn();
             do {
-                ids.add(rows.uniqueId(id));
-                truth.addElement(rows.number(target));
-                predicted.addElement(rows.number(prediction));
+                rows.uniqueId(id);
+                truth.add(rows.number(target));
+                predicted.add(rows.number(prediction));
             } while (rows.next());
-            return new RegressionData(file, List.copyOf(ids), truth.getElements(), predicted.getElements());
+            return new RegressionData(file, rows.ids(), truth.toArray(), predicted.toArray());
         }
     }
 }
