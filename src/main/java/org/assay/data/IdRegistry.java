@@ -150,7 +150,7 @@ final class IdRegistry {
      * finished with the MurmurHash3 fmix64 mixer (common practice). Its low bits pick the slot, and
      * entries that share a slot are told apart by the rest before any text is compared.
      */
-    private static int tag(String s) {
+    static int tag(String s) {
         long h = 0xcbf29ce484222325L;
         for (int i = 0; i < s.length(); i++) h = (h ^ s.charAt(i)) * 0x100000001b3L;
         h ^= h >>> 33;
@@ -160,7 +160,7 @@ final class IdRegistry {
         return (int) ((h ^ (h >>> 33)) >>> 32);
     }
 
-    private static String normalize(String id) {
+    static String normalize(String id) {
         return id.strip().toLowerCase(Locale.ROOT);
     }
 }
