@@ -49,7 +49,7 @@ final class ClassificationMetrics {
                         int pos = positiveClass(d, data, p);
                         OneHotUnitTable table = confusionTable(d, data);
                         int k = data.classCount();
-                        return new PreparedMetric(d, new SumStatistic(table, m -> f.of(m, k, pos)), -1, null, null);
+                        return new PreparedMetric(d, new CellStatistic(table, m -> f.of(m, k, pos)), -1, null, null);
                     }));
             list.add(confusion("macro_" + what, "Macro " + title,
                     "unweighted mean of per-class " + title + " over the classes present in truth or predictions",
@@ -84,7 +84,7 @@ final class ClassificationMetrics {
                 (d, data, p) -> {
                     OneHotUnitTable table = confusionTable(d, data);
                     int k = data.classCount();
-                    return new PreparedMetric(d, new SumStatistic(table, m -> f.of(m, k)), -1, null, null);
+                    return new PreparedMetric(d, new CellStatistic(table, m -> f.of(m, k)), -1, null, null);
                 });
     }
 
@@ -127,7 +127,7 @@ final class ClassificationMetrics {
             cell[i] = success[i] ? 1 : 0;
             k += cell[i];
         }
-        SumStatistic s = new SumStatistic(new OneHotUnitTable(cell, 2), ClassificationMetrics::proportion);
+        CellStatistic s = new CellStatistic(new OneHotUnitTable(cell, 2), ClassificationMetrics::proportion);
         return new PreparedMetric(d, s, k, null, null);
     }
 

@@ -18,7 +18,9 @@ import org.assay.common.UserInputException;
  * <p>A resample is a vector of integer weights: n units drawn uniformly with replacement and
  * counted (multinomial counts summing to n), never a copy of the data (DESIGN.md principle 1).
  * Resample b draws its weights from a {@link SplittableRandom} seeded only by (seed, b), so
- * the replicates are bit-identical for any thread count (principle 5). Work is split into
+ * the replicates are bit-identical for any thread count (principle 5). A statistic of category
+ * counts ({@link CategoryCounts}) is resampled through those counts, and a proportion through
+ * its success count ({@link #runCount}): the same multinomial, drawn without n weights. Work is split into
  * contiguous blocks of resamples, one per thread; each thread reuses one weight buffer.
  *
  * <p>Limits: 100 &le; resamples &le; 10,000,000 (fewer than 100 cannot place a 95% endpoint
@@ -58,6 +60,7 @@ public final class BootstrapEngine {
      *     resample (naming the resample), or its jackknife has the wrong length
      */
     public BootstrapDistribution run(Resampled statistic) {
+        if (statistic instanceof CategoryCounts counts) return runCategories(counts);
         int n = statistic.units();
         requireUnits(n);
         double estimate = statistic.estimate();
@@ -117,6 +120,54 @@ public final class BootstrapEngine {
             replicates = replicate(() -> rng -> (double) sampler.draw(rng) / n);
         }
         return new BootstrapDistribution(estimate, replicates, acceleration, n, true, false);
+    }
+
+    /**
+     * Bootstraps a statistic of category counts: n units resampled with replacement fall into
+     * the categories as Multinomial(n, c_j / n) for observed counts c_j, drawn as a chain of
+     * conditional binomials (category j gets Binomial(units left, c_j / units in categories j and
+     * later), by exact inversion, {@link BinomialInversion}). The jackknife is closed-form: leaving
+     * out a unit of category j gives the statistic at c - e_j, with multiplicity c_j.
+     */
+    private BootstrapDistribution runCategories(CategoryCounts statistic) {
+        int n = statistic.units();
+        requireUnits(n);
+        long[] counts = statistic.categoryCounts();
+        long total = 0;
+        for (long c : counts) {
+            if (c < 0) throw new IllegalArgumentException("negative category count " + c);
+            total += c;
+        }
+        if (total != n) throw new IllegalArgumentException("category counts sum to " + total + ", not " + n);
+        double estimate = statistic.estimate();
+        requireFinite(estimate, "the statistic on the full data");
+        double[] leaveOneOut = new double[counts.length];
+        double[] work = new double[counts.length];
+        for (int j = 0; j < counts.length; j++) work[j] = counts[j];
+        for (int j = 0; j < counts.length; j++) {
+            if (counts[j] == 0) continue;
+            work[j] -= 1;
+            leaveOneOut[j] = statistic.valueOfCounts(work);
+            work[j] += 1;
+        }
+        double acceleration = BootstrapAcceleration.fromWeighted(leaveOneOut, counts);
+        double[] replicates = replicate(() -> {
+            double[] drawn = new double[counts.length];   // one buffer per worker
+            return rng -> {
+                int left = n;
+                long inRest = n;   // observed units in categories j and later
+                for (int j = 0; j < counts.length; j++) {
+                    int x = left == 0 || counts[j] == 0 ? 0
+                            : counts[j] == inRest ? left
+                            : BinomialInversion.inverse(left, (double) counts[j] / inRest, rng.nextDouble());
+                    drawn[j] = x;
+                    left -= x;
+                    inRest -= counts[j];
+                }
+                return statistic.valueOfCounts(drawn);
+            };
+        });
+        return new BootstrapDistribution(estimate, replicates, acceleration, n, false, false, true);
     }
 
     public int resamples() { return resamples; }
