@@ -71,7 +71,7 @@ public final class BootstrapEngine {
                     + " values for " + n + " units");
         }
         double acceleration = BootstrapAcceleration.fromJackknife(leaveOneOut);
-        double[] replicates = replicate(() -> {
+        double[] replicates = replicate(affordableWorkers(4L * n), () -> {
             int[] weights = new int[n]; // one buffer per worker, reused for every resample
             return rng -> {
                 Arrays.fill(weights, 0);
@@ -117,7 +117,7 @@ public final class BootstrapEngine {
             Arrays.fill(replicates, estimate);
         } else {
             BootstrapBinomialSampler sampler = new BootstrapBinomialSampler(n, estimate);
-            replicates = replicate(() -> rng -> (double) sampler.draw(rng) / n);
+            replicates = replicate(threads, () -> rng -> (double) sampler.draw(rng) / n);
         }
         return new BootstrapDistribution(estimate, replicates, acceleration, n, true, false);
     }
@@ -151,7 +151,7 @@ public final class BootstrapEngine {
             work[j] += 1;
         }
         double acceleration = BootstrapAcceleration.fromWeighted(leaveOneOut, counts);
-        double[] replicates = replicate(() -> {
+        double[] replicates = replicate(threads, () -> {
             double[] drawn = new double[counts.length];   // one buffer per worker
             return rng -> {
                 int left = n;
@@ -181,10 +181,21 @@ public final class BootstrapEngine {
         double next(SplittableRandom rng);
     }
 
+    /**
+     * How many of the requested threads can each hold a buffer of {@code bytes}: at most half the
+     * heap still free. Ten million units take 40 MB of weights per worker, so sixteen cores would
+     * need 640 MB; the replicates do not depend on the number of workers, so fewer only takes longer.
+     */
+    private int affordableWorkers(long bytes) {
+        Runtime runtime = Runtime.getRuntime();
+        long free = runtime.maxMemory() - (runtime.totalMemory() - runtime.freeMemory());
+        return (int) Math.max(1, Math.min(threads, free / 2 / Math.max(1, bytes)));
+    }
+
     /** Fills replicates[b] for every b; each worker gets its own Replicate (and buffer). */
-    private double[] replicate(Supplier<Replicate> perWorker) {
+    private double[] replicate(int maxWorkers, Supplier<Replicate> perWorker) {
         double[] out = new double[resamples];
-        int workers = Math.min(threads, resamples);
+        int workers = Math.min(maxWorkers, resamples);
         if (workers == 1) {
             fill(out, 0, resamples, perWorker.get());
             return out;
