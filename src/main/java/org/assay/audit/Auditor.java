@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
@@ -22,13 +23,19 @@ import org.assay.stats.Multiplicity;
  * and assigns the verdicts.
  */
 public final class Auditor {
+    private final Progress progress;
+
+    public Auditor() { this(Progress.NONE); }
+
+    /** @param progress where reading and resampling report how far they have got */
+    public Auditor(Progress progress) { this.progress = progress; }
 
     public AuditResult run(AuditRequest request) {
         ClaimsFile claims = ClaimsReader.read(request.claims());
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(InputFile.of("claims", request.claims()));
         List<String> warnings = new ArrayList<>();
-        Estimator estimator = new Estimator(request.settings());
+        Estimator estimator = new Estimator(request.settings(), progress);
         ClaimAssessor assessor = new ClaimAssessor(request.settings());
 
         List<Finding> findings = new ArrayList<>();
@@ -39,7 +46,7 @@ public final class Auditor {
             ClaimTable table = selectTable(claims, r);
             if (r.tableId() == null) notes = notes.naming(table.id());
             String row = selectRow(claims, table, r);
-            Reproduction.Outputs outputs = r.read();
+            Reproduction.Outputs outputs = r.read(progress);
             inputs.addAll(outputs.inputs());
             sampling.put(table.id(), sampling(outputs));
             for (String typo : notes.unmatched(table.id(), table.claims())) {

@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,7 @@ public record GenerationReproduction(String tableId, String row, Path outputs, L
     }
 
     @Override
-    public Outputs read() {
+    public Outputs read(Progress progress) {
         GenerationData data = GenerationReader.read(outputs, references);
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();

@@ -1,7 +1,10 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.BitSet;
@@ -25,18 +28,32 @@ public final class ClassificationReader {
     private ClassificationReader() {}
 
     public static ClassificationData read(Path predictions, ReadOptions options) {
+        return read(predictions, options, Progress.NONE);
+    }
+
+    /** As {@link #read(Path, ReadOptions)}, reporting the bytes of each file read to {@code progress}. */
+    public static ClassificationData read(Path predictions, ReadOptions options, Progress progress) {
         LabelTable labels = new LabelTable();
         PredictionRows rows;
         BitSet truthClasses = new BitSet();
         if (options.truth() == null) {
-            rows = PredictionRows.read(predictions, options, false, labels);
+            try (Progress.Task reading = reading(progress, "reading ", predictions)) {
+                rows = PredictionRows.read(predictions, options, false, labels, reading);
+            }
         } else {
-            try (TruthFile truthFile = TruthFile.open(options.truth(), options)) {
-                rows = PredictionRows.read(predictions, options, true, labels);
+            try (Progress.Task readingTruth = reading(progress, "reading ", options.truth());
+                 TruthFile truthFile = TruthFile.open(options.truth(), options, readingTruth)) {
+                try (Progress.Task reading = reading(progress, "reading ", predictions)) {
+                    rows = PredictionRows.read(predictions, options, true, labels, reading);
+                }
                 truthClasses = truthFile.join(rows, labels);
             }
         }
-        if (options.manifest() != null) Manifest.checkCovers(options.manifest(), rows.ids());
+        if (options.manifest() != null) {
+            try (Progress.Task checking = reading(progress, "checking ", options.manifest())) {
+                Manifest.checkCovers(options.manifest(), rows.ids(), checking);
+            }
+        }
         rows.ids().releaseLookup();
 
         ClassCoding coding = ClassCoding.of(labels, classFlags(labels, rows, truthClasses));
@@ -60,6 +77,17 @@ public final class ClassificationReader {
         }
         return new ClassificationData(predictions, rows.ids().ids(), coding.classes(), truth, predicted,
                 rows.scores() == null ? null : rows.scores().toArray(), probabilities, positive, List.copyOf(warnings));
+    }
+
+    /** A step over {@code file} counted in bytes (0 when its size cannot be read: the reader reports that). */
+    private static Progress.Task reading(Progress progress, String verb, Path file) {
+        long size;
+        try {
+            size = Files.size(file);
+        } catch (IOException | RuntimeException e) {
+            size = 0;
+        }
+        return progress.start(verb + file.getFileName(), size);
     }
 
     /** Which provisional labels are classes: true labels (both sources) and probability columns. */

@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 import java.io.BufferedReader;
@@ -13,7 +14,7 @@ import java.util.List;
  * start with {@code #} are comments (the sampler records its seed and method there), kept as
  * written. Ids are taken exactly as written, without trimming, like ids in the predictions.
  *
- * <p>Checking predictions against a manifest ({@link #checkCovers(Path, IdRegistry)}) streams the
+ * <p>Checking predictions against a manifest ({@link #checkCovers(Path, IdRegistry, Progress.Task)}) streams the
  * manifest against the predictions' ids instead of reading it into a registry of its own, so a
  * manifest of ten million ids costs four bytes per id on top of the predictions.
  */
@@ -32,7 +33,7 @@ public final class Manifest {
     public static Manifest read(Path file) {
         IdRegistry ids = new IdRegistry(file);
         List<String> comments = new ArrayList<>();
-        eachId(file, comments, ids::add);
+        eachId(file, comments, ids::add, Progress.Task.NONE);
         return new Manifest(ids, ids.size(), List.copyOf(comments));
     }
 
@@ -43,7 +44,7 @@ public final class Manifest {
     public static Manifest describe(Path file) {
         List<String> comments = new ArrayList<>();
         int[] count = new int[1];
-        eachId(file, comments, (id, line) -> count[0]++);
+        eachId(file, comments, (id, line) -> count[0]++, Progress.Task.NONE);
         return new Manifest(null, count[0], List.copyOf(comments));
     }
 
@@ -60,13 +61,13 @@ public final class Manifest {
 
     /**
      * The ids of another task's outputs (generation items, say) against the manifest, as
-     * {@link #checkCovers(Path, IdRegistry)} does for predictions; {@code itemIds.get(i)} is item i,
+     * {@link #checkCovers(Path, IdRegistry, Progress.Task)} does for predictions; {@code itemIds.get(i)} is item i,
      * reported as line i + 1.
      */
     public static void checkCovers(Path manifest, Path outputs, List<String> itemIds) {
         IdRegistry registry = new IdRegistry(outputs);
         for (int i = 0; i < itemIds.size(); i++) registry.add(itemIds.get(i), i + 1);
-        checkCovers(manifest, registry);
+        checkCovers(manifest, registry, Progress.Task.NONE);
     }
 
     /**
@@ -75,9 +76,9 @@ public final class Manifest {
      * and counts the rest. The errors are the ones {@link #read} followed by a comparison of the
      * two registries would give, in the same order.
      */
-    static void checkCovers(Path manifest, IdRegistry predictions) {
+    static void checkCovers(Path manifest, IdRegistry predictions, Progress.Task progress) {
         JoinedIds listed = new JoinedIds(manifest, predictions);
-        eachId(manifest, new ArrayList<>(), listed::add);
+        eachId(manifest, new ArrayList<>(), listed::add, progress);
         int missing = 0;
         int first = -1;
         for (int i = 0; i < predictions.size(); i++) {
@@ -103,10 +104,10 @@ public final class Manifest {
     private interface IdSink { void accept(String id, int line); }
 
     /** Passes every id line to {@code sink} and collects the comments; fails on an empty manifest. */
-    private static void eachId(Path file, List<String> comments, IdSink sink) {
+    private static void eachId(Path file, List<String> comments, IdSink sink, Progress.Task progress) {
         boolean anyLine = false;
         int ids = 0;
-        try (BufferedReader reader = new BufferedReader(StrictUtf8Reader.open(file, "manifest"))) {
+        try (BufferedReader reader = new BufferedReader(StrictUtf8Reader.open(file, "manifest", progress))) {
             int line = 0;
             for (String text = reader.readLine(); text != null; text = reader.readLine()) {
                 line++;

@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 import java.nio.file.Path;
@@ -25,8 +26,9 @@ record PredictionRows(IdRegistry ids, IntColumn truth, IntColumn predicted, Doub
     int line(int row) { return ids.line(row); }
 
     /** Reads every row; {@code truthGiven} says the true labels may come from a truth file instead. */
-    static PredictionRows read(Path file, ReadOptions options, boolean truthGiven, LabelTable labels) {
-        try (RowSource rows = Format.of(file).open(file, "predictions file", options)) {
+    static PredictionRows read(Path file, ReadOptions options, boolean truthGiven, LabelTable labels,
+                               Progress.Task progress) {
+        try (RowSource rows = Format.of(file).open(file, "predictions file", options, progress)) {
             PredictionColumns columns = PredictionColumns.resolve(rows, options, truthGiven);
             int[] probabilityClasses = new int[columns.probability().length];
             for (int c = 0; c < probabilityClasses.length; c++) {

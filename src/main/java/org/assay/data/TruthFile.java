@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 import java.nio.file.Path;
@@ -32,8 +33,8 @@ final class TruthFile implements AutoCloseable {
     }
 
     /** Opens the truth file and checks its header and that it has a row; read it with {@link #join}. */
-    static TruthFile open(Path file, ReadOptions options) {
-        RowSource rows = Format.of(file).open(file, "truth file", options);
+    static TruthFile open(Path file, ReadOptions options, Progress.Task progress) {
+        RowSource rows = Format.of(file).open(file, "truth file", options, progress);
         try {
             int id = Columns.require(rows, options.idColumn(), "the example ids",
                     "set --id-column to the truth file's id column (the same name as in the predictions file)");

@@ -9,6 +9,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Supplier;
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 /**
@@ -32,9 +33,14 @@ public final class BootstrapEngine {
     static final int MIN_RESAMPLES = 100;
     static final int MAX_RESAMPLES = 10_000_000;
 
+    /** Replicates a worker finishes before it reports progress: reporting stays rare next to the work. */
+    private static final int REPORT_EVERY = 64;
+
     private final int resamples;
     private final long seed;
     private final int threads;
+    private Progress progress = Progress.NONE;
+    private String label = "resampling";
 
     public BootstrapEngine(int resamples, long seed, int threads) {
         if (resamples < MIN_RESAMPLES || resamples > MAX_RESAMPLES) {
@@ -170,6 +176,16 @@ public final class BootstrapEngine {
         return new BootstrapDistribution(estimate, replicates, acceleration, n, false, false, true);
     }
 
+    /**
+     * Reports each run's resamples to {@code progress} under {@code label} ("resampling macro_f1");
+     * the replicates do not depend on it. Returns this engine.
+     */
+    public BootstrapEngine reportingTo(Progress progress, String label) {
+        this.progress = progress;
+        this.label = label;
+        return this;
+    }
+
     public int resamples() { return resamples; }
 
     public long seed() { return seed; }
@@ -196,12 +212,19 @@ public final class BootstrapEngine {
     private double[] replicate(int maxWorkers, Supplier<Replicate> perWorker) {
         double[] out = new double[resamples];
         int workers = Math.min(maxWorkers, resamples);
-        if (workers == 1) {
-            fill(out, 0, resamples, perWorker.get());
-            return out;
+        try (Progress.Task task = progress.start(label, resamples)) {
+            if (workers == 1) {
+                fill(out, 0, resamples, perWorker.get(), task);
+                return out;
+            }
+            fillInParallel(out, workers, perWorker, task);
         }
-        ExecutorService pool = Executors.newFixedThreadPool(workers, task -> {
-            Thread t = new Thread(task, "assay-bootstrap");
+        return out;
+    }
+
+    private void fillInParallel(double[] out, int workers, Supplier<Replicate> perWorker, Progress.Task task) {
+        ExecutorService pool = Executors.newFixedThreadPool(workers, runnable -> {
+            Thread t = new Thread(runnable, "assay-bootstrap");
             t.setDaemon(true);
             return t;
         });
@@ -210,7 +233,7 @@ public final class BootstrapEngine {
             for (int w = 0; w < workers; w++) {
                 int from = (int) ((long) resamples * w / workers);
                 int to = (int) ((long) resamples * (w + 1) / workers);
-                blocks.add(pool.submit(() -> fill(out, from, to, perWorker.get())));
+                blocks.add(pool.submit(() -> fill(out, from, to, perWorker.get(), task)));
             }
             for (Future<?> block : blocks) block.get();
         } catch (InterruptedException e) {
@@ -222,15 +245,16 @@ public final class BootstrapEngine {
         } finally {
             pool.shutdownNow();
         }
-        return out;
     }
 
-    private void fill(double[] out, int from, int to, Replicate replicate) {
+    private void fill(double[] out, int from, int to, Replicate replicate, Progress.Task task) {
         for (int b = from; b < to; b++) {
             double value = replicate.next(new SplittableRandom(resampleSeed(seed, b)));
             requireFinite(value, "bootstrap resample " + b);
             out[b] = value;
+            if ((b - from + 1) % REPORT_EVERY == 0) task.advance(REPORT_EVERY);
         }
+        task.advance((to - from) % REPORT_EVERY);
     }
 
     /**

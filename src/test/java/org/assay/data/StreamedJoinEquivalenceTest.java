@@ -38,7 +38,7 @@ class StreamedJoinEquivalenceTest {
             for (int i = 0; i < predictionIds.size(); i++) registry.add(predictionIds.get(i), i + 2);
 
             String expected = outcome(() -> oracleManifest(registry, manifest));
-            String actual = outcome(() -> Manifest.checkCovers(manifest, registry));
+            String actual = outcome(() -> Manifest.checkCovers(manifest, registry, org.assay.common.Progress.Task.NONE));
             assertThat(actual).as("round %d: predictions %s, manifest %s", round, predictionIds, manifestIds)
                     .isEqualTo(expected);
             if (!expected.equals("ok")) errors++;

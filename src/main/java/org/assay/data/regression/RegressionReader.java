@@ -1,6 +1,7 @@
 package org.assay.data.regression;
 
 import java.nio.file.Path;
+import org.assay.common.Progress;
 import org.assay.data.DoubleColumn;
 import org.assay.data.TableRows;
 
@@ -14,7 +15,19 @@ public final class RegressionReader {
     private RegressionReader() {}
 
     public static RegressionData read(Path file, RegressionColumns columns) {
-        try (TableRows rows = TableRows.open(file, "predictions file")) {
+        return read(file, columns, Progress.NONE);
+    }
+
+    /** As {@link #read(Path, RegressionColumns)}, reporting the bytes read to {@code progress}. */
+    public static RegressionData read(Path file, RegressionColumns columns, Progress progress) {
+        long size;
+        try {
+            size = java.nio.file.Files.size(file);
+        } catch (java.io.IOException | RuntimeException e) {
+            size = 0;   // the reader reports a missing file
+        }
+        try (Progress.Task reading = progress.start("reading " + file.getFileName(), size);
+             TableRows rows = TableRows.open(file, "predictions file", reading)) {
             int id = rows.requireColumn(columns.id(), "the example ids",
                     "set --id-column to the column that holds the example ids");
             int target = rows.requireColumn(columns.target(), "the true values",
