@@ -22,7 +22,9 @@ public final class DoubleColumn {
         if (page == pages.length) pages = Arrays.copyOf(pages, pages.length * 2);
         int at = (int) (size & MASK);
         if (pages[page] == null) pages[page] = new double[size == 0 ? 64 : PAGE];
-        else if (at == pages[page].length) pages[page] = Arrays.copyOf(pages[page], Math.min(PAGE, pages[page].length * 2));
+        else if (at == pages[page].length) {
+            pages[page] = Arrays.copyOf(pages[page], Math.min(PAGE, pages[page].length * 2));   // the first page starts small
+        }
         pages[page][at] = value;
         size++;
     }

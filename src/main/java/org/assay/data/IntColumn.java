@@ -21,7 +21,9 @@ final class IntColumn {
         int page = size >>> PAGE_BITS;
         if (page == pages.length) pages = Arrays.copyOf(pages, pages.length * 2);
         if (pages[page] == null) pages[page] = new int[size == 0 ? 64 : PAGE];
-        else if ((size & MASK) == pages[page].length) pages[page] = Arrays.copyOf(pages[page], Math.min(PAGE, pages[page].length * 2));
+        else if ((size & MASK) == pages[page].length) {
+            pages[page] = Arrays.copyOf(pages[page], Math.min(PAGE, pages[page].length * 2));   // the first page starts small
+        }
         pages[page][size & MASK] = value;
         size++;
     }
