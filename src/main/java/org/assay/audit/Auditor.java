@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
@@ -23,6 +24,12 @@ import org.assay.stats.MultiplicityMethod;
  * of reproduced rows the tables name under {@code compare:} ({@link PairedComparisons}).
  */
 public final class Auditor {
+    private final Progress progress;
+
+    public Auditor() { this(Progress.NONE); }
+
+    /** @param progress where reading and resampling report how far they have got */
+    public Auditor(Progress progress) { this.progress = progress; }
 
     public AuditResult run(AuditRequest request) {
         ClaimsFile claims = ClaimsReader.read(request.claims());
@@ -30,7 +37,7 @@ public final class Auditor {
         inputs.add(InputFile.of("claims", request.claims()));
         inputs.get(0).sha256();   // hashed as read (InputFile hashes lazily)
         List<String> warnings = new ArrayList<>();
-        Estimator estimator = new Estimator(request.settings());
+        Estimator estimator = new Estimator(request.settings(), progress);
         ClaimAssessor assessor = new ClaimAssessor(request.settings());
 
         List<Finding> findings = new ArrayList<>();
@@ -42,7 +49,7 @@ public final class Auditor {
             ClaimTable table = selectTable(claims, r);
             if (r.tableId() == null) notes = notes.naming(table.id());
             String row = selectRow(claims, table, r);
-            Reproduction.Outputs outputs = r.read();
+            Reproduction.Outputs outputs = r.read(progress);
             reproduced.put(List.of(table.id(), row), outputs);
             outputs.inputs().forEach(InputFile::sha256);   // the report describes the files as they were read
             inputs.addAll(outputs.inputs());

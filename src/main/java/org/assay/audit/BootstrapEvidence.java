@@ -26,6 +26,10 @@ final class BootstrapEvidence implements Evidence {
         if (raw.countShortcut()) {
             notes.add("resampled counts drawn directly from Binomial(n, k/n), equivalent to resampling the 0/1 outcomes");
         }
+        if (raw.categoryShortcut()) {
+            notes.add("resampled confusion-matrix counts drawn directly from Multinomial(n, observed cell shares),"
+                    + " equivalent to resampling the examples");
+        }
     }
 
     BootstrapDistribution distribution() { return distribution; }

@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -16,8 +17,8 @@ public record ClassificationReproduction(String tableId, String row, Path predic
         implements Reproduction {
 
     @Override
-    public Outputs read() {
-        ClassificationData data = ClassificationReader.read(predictions, options);
+    public Outputs read(Progress progress) {
+        ClassificationData data = ClassificationReader.read(predictions, options, progress);
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(InputFile.of("predictions" + where, predictions));

@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import org.assay.metrics.MetricKind;
 import org.assay.metrics.PreparedMetric;
 import org.assay.stats.BootstrapEngine;
@@ -8,8 +9,12 @@ import org.assay.stats.DeLong;
 /** Turns a prepared metric into evidence with the method the settings ask for. */
 final class Estimator {
     private final EstimationSettings settings;
+    private final Progress progress;
 
-    Estimator(EstimationSettings settings) { this.settings = settings; }
+    Estimator(EstimationSettings settings, Progress progress) {
+        this.settings = settings;
+        this.progress = progress;
+    }
 
     /**
      * @param population full test-set size N, or null when unknown
@@ -24,7 +29,8 @@ final class Estimator {
         if (kind == MetricKind.ROC_AUC && choice == IntervalChoice.DELONG) {
             return new AucEvidence(DeLong.of(metric.scores(), metric.positive()), n, population);
         }
-        BootstrapEngine engine = new BootstrapEngine(settings.resamples(), settings.seed(), settings.threads());
+        BootstrapEngine engine = new BootstrapEngine(settings.resamples(), settings.seed(), settings.threads())
+                .reportingTo(progress, "resampling " + metric.definition().id());
         try {
             var raw = kind == MetricKind.COUNT
                     ? engine.runCount(metric.successes(), n)

@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,7 @@ public record GenerationReproduction(String tableId, String row, Path outputs, L
     }
 
     @Override
-    public Outputs read() {
+    public Outputs read(Progress progress) {
         GenerationData data = GenerationReader.read(outputs, references);
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();
@@ -32,7 +33,7 @@ public record GenerationReproduction(String tableId, String row, Path outputs, L
             inputs.add(InputFile.of("references " + (i + 1) + where, references.get(i)));
         }
         if (manifest != null) {
-            Manifest.read(manifest).checkCovers(outputs, data.ids());
+            Manifest.checkCovers(manifest, outputs, data.ids());
             inputs.add(InputFile.of("manifest" + where, manifest));
         }
         String what = data.size() + " items" + (references.isEmpty() ? "" : ", " + references.size() + " reference files");

@@ -3,6 +3,7 @@ package org.assay.audit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.assay.common.Progress;
 import org.assay.data.EvaluationData;
 import org.assay.metrics.MetricRegistry;
 import org.assay.metrics.PreparedMetric;
@@ -10,8 +11,15 @@ import org.assay.metrics.PreparedMetric;
 /** Estimates metrics with intervals for a predictions file (the {@code measure} command). */
 public final class Measurer {
     private final EstimationSettings settings;
+    private final Progress progress;
 
-    public Measurer(EstimationSettings settings) { this.settings = settings; }
+    public Measurer(EstimationSettings settings) { this(settings, Progress.NONE); }
+
+    /** @param progress where resampling reports how far it has got */
+    public Measurer(EstimationSettings settings, Progress progress) {
+        this.settings = settings;
+        this.progress = progress;
+    }
 
     /** A metric id with its parameters, as given on the command line. */
     public record MetricRequest(String id, Map<String, String> params) {}
@@ -21,7 +29,7 @@ public final class Measurer {
             throw org.assay.common.UserInputException.usage("--test-size " + population + " is smaller than the "
                     + data.size() + " examples in " + data.source(), "give the size of the full test set");
         }
-        Estimator estimator = new Estimator(settings);
+        Estimator estimator = new Estimator(settings, progress);
         List<Measurement> out = new ArrayList<>();
         for (MetricRequest r : metrics) {
             PreparedMetric m = MetricRegistry.get(r.id()).prepare(data, r.params());

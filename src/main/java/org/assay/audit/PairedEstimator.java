@@ -51,8 +51,8 @@ final class PairedEstimator {
         IntervalChoice bootstrapChoice = choice.isBootstrap() ? choice : IntervalChoice.BCA;
         PairedBootstrapEvidence bootstrap = bootstrap(a, b, index, bootstrapChoice, population);
         if (kind == MetricKind.COUNT && choice.isProportion()) {
-            SumStatistic sa = (SumStatistic) a.statistic();
-            SumStatistic sb = (SumStatistic) b.statistic();
+            SumStatistic sa = sums(a.statistic());
+            SumStatistic sb = sums(b.statistic());
             long onlyA = 0;
             long onlyB = 0;
             for (int i = 0; i < index.length; i++) {
@@ -64,8 +64,9 @@ final class PairedEstimator {
             return new PairedCountEvidence(onlyA, onlyB, bootstrap, population);
         }
         if (method == PairedMethod.RANDOMIZATION) {
-            if (a.statistic() instanceof SumStatistic sa && b.statistic() instanceof SumStatistic sb && sameCoding
-                    && sa.table().width() == sb.table().width()) {
+            SumStatistic sa = sums(a.statistic());
+            SumStatistic sb = sums(b.statistic());
+            if (sa != null && sb != null && sameCoding && sa.table().width() == sb.table().width()) {
                 try {
                     ApproximateRandomization.Result r = new ApproximateRandomization(settings.resamples(), settings.seed(),
                             settings.threads()).test(new SwappedSums(sa, sb, index));
@@ -93,5 +94,12 @@ final class PairedEstimator {
             throw UserInputException.usage("the gap in " + a.definition().id() + " cannot be bootstrapped on these "
                     + a.units() + " items: " + e.getMessage(), "evaluate more items");
         }
+    }
+
+    /** A statistic as a sum over units (a cell statistic is one), or null when it is not such a sum. */
+    private static SumStatistic sums(org.assay.stats.Resampled r) {
+        if (r instanceof SumStatistic s) return s;
+        if (r instanceof org.assay.metrics.CellStatistic c) return c.asSum();
+        return null;
     }
 }

@@ -34,7 +34,7 @@ public final class PlanPilot {
                     + prepared.notComputable(), "give a pilot that can");
         }
         // infinite population: the raw standard error at the pilot's size, so that se^2 * size is the per-item spread
-        Evidence e = new Estimator(settings).evidence(prepared, null);
+        Evidence e = new Estimator(settings, org.assay.common.Progress.NONE).evidence(prepared, null);
         if (!(e.standardError() >= 0) || Double.isInfinite(e.standardError())) {
             throw UserInputException.usage("the pilot " + data.source() + " gives no standard error for " + metric.id(),
                     "give a larger pilot");

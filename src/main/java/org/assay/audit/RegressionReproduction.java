@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.nio.file.Path;
 import java.util.List;
 import org.assay.data.regression.RegressionColumns;
@@ -11,8 +12,8 @@ public record RegressionReproduction(String tableId, String row, Path prediction
         implements Reproduction {
 
     @Override
-    public Outputs read() {
-        RegressionData data = RegressionReader.read(predictions, columns);
+    public Outputs read(Progress progress) {
+        RegressionData data = RegressionReader.read(predictions, columns, progress);
         String where = tableId == null ? "" : " for " + tableId;
         return new Outputs(List.of(new Part(null, null, data, false, "predictions")),
                 List.of(InputFile.of("predictions" + where, predictions)));

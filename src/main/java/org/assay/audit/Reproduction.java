@@ -3,6 +3,7 @@ package org.assay.audit;
 import java.util.List;
 import java.util.Set;
 import org.assay.claims.Claim;
+import org.assay.common.Progress;
 import org.assay.data.EvaluationData;
 
 /**
@@ -18,7 +19,10 @@ public interface Reproduction {
     String row();
 
     /** Reads the outputs from their files. */
-    Outputs read();
+    default Outputs read() { return read(Progress.NONE); }
+
+    /** Reads the outputs from their files, reporting how far reading large files has got. */
+    Outputs read(Progress progress);
 
     /**
      * @param columnPrefix  first column-path element of the claims this part serves, or null for all

@@ -52,7 +52,7 @@ record ReproductionPairing(int[] bIndexOfA) {
 
     /** The ids of the resampling units, in order; a retrieval direction's are its query ids. */
     static List<String> unitIds(EvaluationData data) {
-        if (data instanceof ClassificationData c) return Arrays.asList(c.ids());
+        if (data instanceof ClassificationData c) return c.ids();
         if (data instanceof RegressionData r) return r.ids();
         if (data instanceof GenerationData g) return g.ids();
         if (data instanceof RetrievalDirection d) return d.ranks().queryIds();

@@ -1,5 +1,6 @@
 package org.assay.audit;
 
+import org.assay.common.Progress;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -35,7 +36,7 @@ public record RetrievalReproduction(String tableId, String row, List<RetrievalIn
     }
 
     @Override
-    public Outputs read() {
+    public Outputs read(Progress progress) {
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();
         List<Part> parts = new ArrayList<>();

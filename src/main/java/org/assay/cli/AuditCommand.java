@@ -53,6 +53,8 @@ import picocli.CommandLine.Model.CommandSpec;
 final class AuditCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
+    @picocli.CommandLine.ParentCommand Main main;
+
     @Parameters(arity = "0..1", paramLabel = "AUDIT_FILE", description = "An audit file (YAML) instead of --claims/--predictions.")
     Path auditFile;
 
@@ -122,7 +124,7 @@ final class AuditCommand implements Callable<Integer> {
         FailOn condition = FailOn.parse(failOn);
         var formats = report.formats();
         AuditRequest request = request();
-        AuditResult result = new Auditor().run(request);
+        AuditResult result = new Auditor(main.progress()).run(request);
         Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
                 report.templates(templatesFromFile));
         List<Path> written = new OutputDirectory(out, force).write(files);

@@ -48,6 +48,8 @@ final class DemoCommand implements Callable<Integer> {
 
     @Spec CommandSpec spec;
 
+    @picocli.CommandLine.ParentCommand Main main;
+
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "assay-demo", description = "Folder to write to (default ${DEFAULT-VALUE}).")
     Path out;
 
@@ -71,8 +73,8 @@ final class DemoCommand implements Callable<Integer> {
         new OutputDirectory(inputDir, force).writeBytes(inputs);
         AuditFileReader.AuditFile f = AuditFileReader.read(inputDir.resolve("audit.yaml"));
         double margin = f.marginPoints() == null ? 1.0 : f.marginPoints();
-        AuditResult result = new Auditor().run(new AuditRequest(f.claims(), f.reproductions(), estimation.settings(),
-                margin / 100, f.notes(), f.multiplicity(), f.pairedMethod()));
+        AuditResult result = new Auditor(main.progress()).run(new AuditRequest(f.claims(), f.reproductions(),
+                estimation.settings(), margin / 100, f.notes(), f.multiplicity(), f.pairedMethod()));
         Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
                 report.templates(f.templates()));
         var written = new OutputDirectory(out, force).write(files);

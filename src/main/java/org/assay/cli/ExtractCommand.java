@@ -36,6 +36,8 @@ import picocli.CommandLine.Model.CommandSpec;
 final class ExtractCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
+    @picocli.CommandLine.ParentCommand Main main;
+
     @Parameters(paramLabel = "PDF", description = "The paper (a PDF with a text layer).")
     Path pdf;
 
@@ -65,7 +67,7 @@ final class ExtractCommand implements Callable<Integer> {
         String fmt = format(format, out);
         PageSelection selection = pages == null ? null : PageSelection.parse(pages);
         String only = table == null ? null : table.strip().replaceFirst("^(?i)(table|tab\\.?)\\s*", "");
-        Extraction x = new TableExtractor().extract(pdf, password, selection, only);
+        Extraction x = new TableExtractor().extract(pdf, password, selection, only, main.progress());
         boolean draftToStdout = "-".equals(out);
         var preview = draftToStdout ? spec.commandLine().getErr() : spec.commandLine().getOut();
         if (x.tables().isEmpty()) {

@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.util.Properties;
+import java.util.function.LongSupplier;
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -37,18 +39,41 @@ public final class Main implements Runnable {
 
     @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
+    /** Where long steps report progress: a terminal line, or nothing (see {@link #progressFor}). */
+    private Progress progress = Progress.NONE;
+
+    /** The progress display the commands pass down to the work. */
+    Progress progress() { return progress; }
+
     @Override
     public void run() {
         throw new CommandLine.ParameterException(spec.commandLine(), "name a command (audit, check, extract, measure, plan, sample, init, demo)");
     }
 
     public static void main(String[] args) {
-        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+        PrintWriter err = new PrintWriter(System.err, true);
+        System.exit(execute(args, new PrintWriter(System.out, true), err,
+                progressFor(System.console() != null, err, System::nanoTime)));
     }
 
-    /** Runs the command line and returns the exit code; used by main and by the tests. */
+    /**
+     * Progress lines only on a terminal: {@code System.console()} is non-null only when the process
+     * talks to one (neither output redirected), so files, pipes and tests never get them.
+     */
+    static Progress progressFor(boolean terminal, PrintWriter err, LongSupplier clock) {
+        return terminal ? new TerminalProgress(err, clock) : Progress.NONE;
+    }
+
+    /** Runs the command line and returns the exit code, with no progress display; used by the tests. */
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new Main());
+        return execute(args, out, err, Progress.NONE);
+    }
+
+    /** Runs the command line and returns the exit code; long steps report to {@code progress}. */
+    static int execute(String[] args, PrintWriter out, PrintWriter err, Progress progress) {
+        Main main = new Main();
+        main.progress = progress;
+        CommandLine cl = new CommandLine(main);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, line, parsed) -> {

@@ -39,6 +39,8 @@ import picocli.CommandLine.Model.CommandSpec;
 final class MeasureCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
+    @picocli.CommandLine.ParentCommand Main main;
+
     @Parameters(paramLabel = "FILE", arity = "0..1",
             description = "Predictions file (CSV, TSV or JSONL); for generation a .jsonl of items with references, or a "
                     + "hypotheses file with --references; retrieval reads --scores or --ranked instead.")
@@ -79,9 +81,9 @@ final class MeasureCommand implements Callable<Integer> {
             throw UserInputException.usage("--test-size must be positive", "give the size of the full test set");
         }
         List<Measurer.MetricRequest> requests = withCutoffs(metrics.stream().map(MeasureCommand::parseMetric).toList(), ks);
-        Reproduction.Outputs outputs = inputs.reproduction(t, file).read();
+        Reproduction.Outputs outputs = inputs.reproduction(t, file).read(main.progress());
         List<PartResult> results = new ArrayList<>();
-        Measurer measurer = new Measurer(estimation.settings());
+        Measurer measurer = new Measurer(estimation.settings(), main.progress());
         for (Reproduction.Part part : outputs.parts()) {
             List<Measurer.MetricRequest> mine = requests.stream().filter(r -> serves(outputs, part, r.id())).toList();
             if (!mine.isEmpty()) results.add(new PartResult(part, measurer.measure(part.data(), mine, testSize)));

@@ -8,24 +8,24 @@ import java.util.List;
  * order of the predictions file. Classes are coded 0..K-1 in the order of {@link #classes()}.
  *
  * @param source        the predictions file
- * @param ids           example ids, unique
+ * @param ids           example ids, unique (a compact list, decoded on access)
  * @param classes       class labels as strings; index = class code
  * @param truth         true class code per example
  * @param predicted     predicted class code per example, or null when the file has no predicted
  *                      label and no per-class probabilities to take the arg-max of
  * @param scores        binary score of the positive class per example, or null
- * @param probabilities per-class probabilities, row-major n x K, or null
+ * @param probabilities per-class probabilities, n rows x K classes, or null
  * @param positive      code of the positive class, or -1 when none is named (multiclass)
  * @param warnings      non-fatal findings, each one line naming the file and row
  */
 public record ClassificationData(
         Path source,
-        String[] ids,
+        List<String> ids,
         List<String> classes,
         int[] truth,
         int[] predicted,
         double[] scores,
-        double[] probabilities,
+        ProbabilityTable probabilities,
         int positive,
         List<String> warnings) implements EvaluationData {
 
@@ -39,9 +39,8 @@ public record ClassificationData(
     public double[] positiveScores() {
         if (scores != null) return scores;
         if (probabilities != null && positive >= 0) {
-            int k = classCount();
             double[] s = new double[size()];
-            for (int i = 0; i < s.length; i++) s[i] = probabilities[i * k + positive];
+            for (int i = 0; i < s.length; i++) s[i] = probabilities.get(i, positive);
             return s;
         }
         return null;

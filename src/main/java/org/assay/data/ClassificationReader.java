@@ -1,9 +1,13 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.List;
 
 /**
@@ -15,23 +19,50 @@ import java.util.List;
  * predicted label but has probabilities, the prediction is their arg-max, ties going to the lowest
  * class code. Every problem is a {@link UserInputException} naming the file and line; the only
  * non-fatal finding, probabilities that do not sum to one, is a warning in the result.
+ *
+ * <p>Memory stays bounded by the per-row columns: the predictions are read once into compact
+ * columns, the truth file and the manifest are streamed against their ids afterwards, and the
+ * id lookup table is released before the final class codes are written.
  */
 public final class ClassificationReader {
     private ClassificationReader() {}
 
     public static ClassificationData read(Path predictions, ReadOptions options) {
-        LabelTable labels = new LabelTable();
-        TruthFile truthFile = options.truth() == null ? null : TruthFile.read(options.truth(), options, labels);
-        PredictionRows rows = PredictionRows.read(predictions, options, truthFile, labels);
-        if (options.manifest() != null) Manifest.read(options.manifest()).checkCovers(rows.ids());
+        return read(predictions, options, Progress.NONE);
+    }
 
-        ClassCoding coding = ClassCoding.of(labels, classFlags(labels, rows, truthFile));
+    /** As {@link #read(Path, ReadOptions)}, reporting the bytes of each file read to {@code progress}. */
+    public static ClassificationData read(Path predictions, ReadOptions options, Progress progress) {
+        LabelTable labels = new LabelTable();
+        PredictionRows rows;
+        BitSet truthClasses = new BitSet();
+        if (options.truth() == null) {
+            try (Progress.Task reading = reading(progress, "reading ", predictions)) {
+                rows = PredictionRows.read(predictions, options, false, labels, reading);
+            }
+        } else {
+            try (Progress.Task readingTruth = reading(progress, "reading ", options.truth());
+                 TruthFile truthFile = TruthFile.open(options.truth(), options, readingTruth)) {
+                try (Progress.Task reading = reading(progress, "reading ", predictions)) {
+                    rows = PredictionRows.read(predictions, options, true, labels, reading);
+                }
+                truthClasses = truthFile.join(rows, labels);
+            }
+        }
+        if (options.manifest() != null) {
+            try (Progress.Task checking = reading(progress, "checking ", options.manifest())) {
+                Manifest.checkCovers(options.manifest(), rows.ids(), checking);
+            }
+        }
+        rows.ids().releaseLookup();
+
+        ClassCoding coding = ClassCoding.of(labels, classFlags(labels, rows, truthClasses));
         int k = coding.size();
         int[] truth = recode(rows.truth(), coding);
         int[] predicted = rows.predicted() == null ? null : recodePredictions(rows, coding, labels, predictions);
-        double[] probabilities = rows.probabilities() == null ? null
+        ProbabilityTable probabilities = rows.probabilities() == null ? null
                 : Probabilities.inClassOrder(rows, coding, labels, options);
-        if (predicted == null && probabilities != null) predicted = Probabilities.argMax(probabilities, k);
+        if (predicted == null && probabilities != null) predicted = Probabilities.argMax(probabilities);
 
         int positive = PositiveClass.choose(coding.classes(), options.positive(), predictions);
         if (rows.scores() != null && positive < 0) {
@@ -42,35 +73,47 @@ public final class ClassificationReader {
         }
         List<String> warnings = new ArrayList<>();
         if (probabilities != null) {
-            Probabilities.sumWarning(predictions, rows, probabilities, k).ifPresent(warnings::add);
+            Probabilities.sumWarning(predictions, rows, probabilities).ifPresent(warnings::add);
         }
-        return new ClassificationData(predictions, rows.ids().toArray(), coding.classes(), truth, predicted,
-                rows.scores(), probabilities, positive, List.copyOf(warnings));
+        return new ClassificationData(predictions, rows.ids().ids(), coding.classes(), truth, predicted,
+                rows.scores() == null ? null : rows.scores().toArray(), probabilities, positive, List.copyOf(warnings));
+    }
+
+    /** A step over {@code file} counted in bytes (0 when its size cannot be read: the reader reports that). */
+    private static Progress.Task reading(Progress progress, String verb, Path file) {
+        long size;
+        try {
+            size = Files.size(file);
+        } catch (IOException | RuntimeException e) {
+            size = 0;
+        }
+        return progress.start(verb + file.getFileName(), size);
     }
 
     /** Which provisional labels are classes: true labels (both sources) and probability columns. */
-    private static boolean[] classFlags(LabelTable labels, PredictionRows rows, TruthFile truthFile) {
+    private static boolean[] classFlags(LabelTable labels, PredictionRows rows, BitSet truthClasses) {
         boolean[] isClass = new boolean[labels.size()];
-        for (int code : rows.truth()) isClass[code] = true;
+        IntColumn truth = rows.truth();
+        for (int i = 0; i < truth.size(); i++) isClass[truth.get(i)] = true;
         for (int code : rows.probabilityClasses()) isClass[code] = true;
-        if (truthFile != null) for (int i = 0; i < truthFile.size(); i++) isClass[truthFile.label(i)] = true;
+        truthClasses.stream().forEach(code -> isClass[code] = true);
         return isClass;
     }
 
-    private static int[] recode(int[] provisional, ClassCoding coding) {
-        int[] coded = new int[provisional.length];
-        for (int i = 0; i < coded.length; i++) coded[i] = coding.code(provisional[i]);
+    private static int[] recode(IntColumn provisional, ClassCoding coding) {
+        int[] coded = new int[provisional.size()];
+        for (int i = 0; i < coded.length; i++) coded[i] = coding.code(provisional.get(i));
         return coded;
     }
 
     private static int[] recodePredictions(PredictionRows rows, ClassCoding coding, LabelTable labels, Path file) {
-        int[] provisional = rows.predicted();
-        int[] coded = new int[provisional.length];
+        IntColumn provisional = rows.predicted();
+        int[] coded = new int[provisional.size()];
         for (int i = 0; i < coded.length; i++) {
-            coded[i] = coding.code(provisional[i]);
+            coded[i] = coding.code(provisional.get(i));
             if (coded[i] < 0) {
                 throw new UserInputException(file, RowErrors.line(rows.line(i)),
-                        "predicted label '" + labels.label(provisional[i]) + "' is not a class of the ground truth"
+                        "predicted label '" + labels.label(provisional.get(i)) + "' is not a class of the ground truth"
                                 + " or the probability columns " + coding.classes(),
                         "check the spelling, or give a truth file (--truth) that contains this class");
             }

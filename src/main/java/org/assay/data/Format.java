@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 import java.nio.file.Path;
@@ -30,7 +31,12 @@ enum Format {
      * which JSON fields must be numbers and how a nested probabilities object is named.
      */
     RowSource open(Path file, String what, ReadOptions options) {
-        StrictUtf8Reader reader = StrictUtf8Reader.open(file, what);
+        return open(file, what, options, Progress.Task.NONE);
+    }
+
+    /** As above, reporting the bytes read to {@code progress}. */
+    RowSource open(Path file, String what, ReadOptions options, Progress.Task progress) {
+        StrictUtf8Reader reader = StrictUtf8Reader.open(file, what, progress);
         switch (this) {
             case CSV: return new DelimitedRowSource(file, reader, ',');
             case TSV: return new DelimitedRowSource(file, reader, '\t');

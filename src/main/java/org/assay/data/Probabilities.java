@@ -17,16 +17,16 @@ final class Probabilities {
     private Probabilities() {}
 
     /**
-     * Reorders the file's probability columns into class order. Every class needs a column: a
-     * class without one (a label seen only in the truth) is an error, not a zero.
+     * Reorders the file's probability columns into class order, in place. Every class needs a
+     * column: a class without one (a label seen only in the truth) is an error, not a zero.
      */
-    static double[] inClassOrder(PredictionRows rows, ClassCoding coding, LabelTable labels, ReadOptions options) {
+    static ProbabilityTable inClassOrder(PredictionRows rows, ClassCoding coding, LabelTable labels, ReadOptions options) {
         int k = coding.size();
         int[] columnOfClass = new int[k];
         java.util.Arrays.fill(columnOfClass, -1);
         int[] columns = rows.probabilityClasses();
         for (int c = 0; c < columns.length; c++) columnOfClass[coding.code(columns[c])] = c;
-        for (int code = 0; code < labels.size(); code++) {
+        for (int code : labels.inOrderSeen()) {
             int cls = coding.code(code);
             if (cls >= 0 && columnOfClass[cls] < 0) {
                 throw new UserInputException(labels.firstFile(code), RowErrors.line(labels.firstLine(code)),
@@ -35,21 +35,24 @@ final class Probabilities {
                         "add a probability column for every class, or check the spelling of this label");
             }
         }
-        double[] source = rows.probabilities();
-        double[] ordered = new double[source.length];
-        for (int row = 0; row < rows.size(); row++) {
-            for (int cls = 0; cls < k; cls++) ordered[row * k + cls] = source[row * k + columnOfClass[cls]];
-        }
-        return ordered;
+        ProbabilityTable table = rows.probabilities();
+        table.reorder(columnOfClass);
+        return table;
     }
 
     /** The class of highest probability per row; on a tie, the lowest class code. */
-    static int[] argMax(double[] probabilities, int k) {
-        int[] best = new int[probabilities.length / k];
+    static int[] argMax(ProbabilityTable probabilities) {
+        int k = probabilities.classes();
+        int[] best = new int[probabilities.rows()];
         for (int row = 0; row < best.length; row++) {
             int at = 0;
+            double top = probabilities.get(row, 0);
             for (int cls = 1; cls < k; cls++) {
-                if (probabilities[row * k + cls] > probabilities[row * k + at]) at = cls;
+                double p = probabilities.get(row, cls);
+                if (p > top) {
+                    at = cls;
+                    top = p;
+                }
             }
             best[row] = at;
         }
@@ -57,13 +60,14 @@ final class Probabilities {
     }
 
     /** One warning for all rows whose probabilities do not sum to 1 within the tolerance. */
-    static Optional<String> sumWarning(Path file, PredictionRows rows, double[] probabilities, int k) {
+    static Optional<String> sumWarning(Path file, PredictionRows rows, ProbabilityTable probabilities) {
+        int k = probabilities.classes();
         int off = 0;
         int worst = -1;
         double worstSum = 0;
         for (int row = 0; row < rows.size(); row++) {
             double sum = 0;
-            for (int cls = 0; cls < k; cls++) sum += probabilities[row * k + cls];
+            for (int cls = 0; cls < k; cls++) sum += probabilities.get(row, cls);
             double distance = Math.abs(sum - 1);
             if (distance > SUM_TOLERANCE) {
                 off++;

@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 import java.io.IOException;
@@ -28,6 +29,7 @@ final class StrictUtf8Reader extends Reader {
 
     private final Path file;
     private final InputStream in;
+    private final Progress.Task progress;
     private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
             .onMalformedInput(CodingErrorAction.REPORT)
             .onUnmappableCharacter(CodingErrorAction.REPORT);
@@ -39,15 +41,21 @@ final class StrictUtf8Reader extends Reader {
     /** Newlines delivered to the caller or sitting decoded in {@link #chars}. */
     private long newlines;
 
-    private StrictUtf8Reader(Path file, InputStream in) {
+    private StrictUtf8Reader(Path file, InputStream in, Progress.Task progress) {
         this.file = file;
         this.in = in;
+        this.progress = progress;
         bytes.flip();   // empty, ready for reading
         chars.flip();
     }
 
     /** Opens {@code file}; a missing or unreadable file is a {@link UserInputException}. */
     static StrictUtf8Reader open(Path file, String what) {
+        return open(file, what, Progress.Task.NONE);
+    }
+
+    /** As {@link #open(Path, String)}, reporting the bytes read to {@code progress}. */
+    static StrictUtf8Reader open(Path file, String what, Progress.Task progress) {
         if (!Files.exists(file)) {
             throw new UserInputException(file, null, what + " not found",
                     "check the path and the working directory");
@@ -57,7 +65,7 @@ final class StrictUtf8Reader extends Reader {
                     "give the path of the file itself");
         }
         try {
-            return new StrictUtf8Reader(file, Files.newInputStream(file));
+            return new StrictUtf8Reader(file, Files.newInputStream(file), progress);
         } catch (IOException e) {
             throw new UserInputException(file, null, "cannot read " + what + ": " + e.getMessage(),
                     "check that the file exists and is readable", e);
@@ -105,8 +113,12 @@ final class StrictUtf8Reader extends Reader {
     private void readBytes() throws IOException {
         bytes.compact();
         int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
-        if (n < 0) endOfInput = true;
-        else bytes.position(bytes.position() + n);
+        if (n < 0) {
+            endOfInput = true;
+        } else {
+            bytes.position(bytes.position() + n);
+            progress.advance(n);
+        }
         bytes.flip();
     }
 

@@ -29,7 +29,12 @@ public final class TableRows implements AutoCloseable {
      * {@code what} names the file's role in messages ("predictions file").
      */
     public static TableRows open(Path file, String what) {
-        return new TableRows(Format.of(file).open(file, what, PLAIN_JSON));
+        return open(file, what, org.assay.common.Progress.Task.NONE);
+    }
+
+    /** As {@link #open(Path, String)}, reporting the bytes read to {@code progress}. */
+    public static TableRows open(Path file, String what, org.assay.common.Progress.Task progress) {
+        return new TableRows(Format.of(file).open(file, what, PLAIN_JSON, progress));
     }
 
     public Path file() { return rows.file(); }
@@ -67,6 +72,9 @@ public final class TableRows implements AutoCloseable {
         ids.add(id, rows.line());
         return id;
     }
+
+    /** The ids accepted by {@link #uniqueId} so far, in order (a compact list, decoded on access). */
+    public List<String> ids() { return ids.ids(); }
 
     @Override
     public void close() { rows.close(); }

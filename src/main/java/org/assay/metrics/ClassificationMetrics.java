@@ -6,6 +6,7 @@ import java.util.Map;
 import java.util.Set;
 import org.assay.common.UserInputException;
 import org.assay.data.ClassificationData;
+import org.assay.data.ProbabilityTable;
 
 /**
  * The classification metrics. Each is defined over per-example statistics: a correct flag
@@ -48,7 +49,7 @@ final class ClassificationMetrics {
                         int pos = positiveClass(d, data, p);
                         OneHotUnitTable table = confusionTable(d, data);
                         int k = data.classCount();
-                        return new PreparedMetric(d, new SumStatistic(table, m -> f.of(m, k, pos)), -1, null, null);
+                        return new PreparedMetric(d, new CellStatistic(table, m -> f.of(m, k, pos)), -1, null, null);
                     }));
             list.add(confusion("macro_" + what, "Macro " + title,
                     "unweighted mean of per-class " + title + " over the classes present in truth or predictions",
@@ -83,7 +84,7 @@ final class ClassificationMetrics {
                 (d, data, p) -> {
                     OneHotUnitTable table = confusionTable(d, data);
                     int k = data.classCount();
-                    return new PreparedMetric(d, new SumStatistic(table, m -> f.of(m, k)), -1, null, null);
+                    return new PreparedMetric(d, new CellStatistic(table, m -> f.of(m, k)), -1, null, null);
                 });
     }
 
@@ -126,7 +127,7 @@ final class ClassificationMetrics {
             cell[i] = success[i] ? 1 : 0;
             k += cell[i];
         }
-        SumStatistic s = new SumStatistic(new OneHotUnitTable(cell, 2), ClassificationMetrics::proportion);
+        CellStatistic s = new CellStatistic(new OneHotUnitTable(cell, 2), ClassificationMetrics::proportion);
         return new PreparedMetric(d, s, k, null, null);
     }
 
@@ -150,7 +151,7 @@ final class ClassificationMetrics {
         if (k < 1 || k > classes) {
             throw UserInputException.usage("top_k_accuracy k=" + k + " is outside 1.." + classes, "choose k within the class count");
         }
-        double[] p = data.probabilities();
+        ProbabilityTable p = data.probabilities();
         if (p == null) {
             throw new UserInputException(data.source(), null, "top_k_accuracy needs per-class probability columns",
                     "add p_<class> columns");
@@ -158,9 +159,9 @@ final class ClassificationMetrics {
         boolean[] hit = new boolean[data.size()];
         for (int i = 0; i < hit.length; i++) {
             int t = data.truth()[i];
-            double pt = p[i * classes + t];
+            double pt = p.get(i, t);
             int above = 0;
-            for (int c = 0; c < classes; c++) if (c != t && p[i * classes + c] >= pt) above++;
+            for (int c = 0; c < classes; c++) if (c != t && p.get(i, c) >= pt) above++;
             hit[i] = above < k;
         }
         return count(d, data, hit);
@@ -189,9 +190,8 @@ final class ClassificationMetrics {
         if (data.scores() != null && pos == data.positive()) {
             scores = data.scores();
         } else if (data.probabilities() != null) {
-            int k = data.classCount();
             scores = new double[data.size()];
-            for (int i = 0; i < scores.length; i++) scores[i] = data.probabilities()[i * k + pos];
+            for (int i = 0; i < scores.length; i++) scores[i] = data.probabilities().get(i, pos);
         } else {
             throw new UserInputException(data.source(), null, "roc_auc needs a score column or per-class probabilities",
                     "add a score column (or name it with --score-column)");

@@ -1,6 +1,5 @@
 package org.assay.metrics;
 
-import java.util.Arrays;
 import org.assay.stats.Resampled;
 
 /**
@@ -14,27 +13,69 @@ import org.assay.stats.Resampled;
  */
 public final class RocAucStatistic implements Resampled {
     private final int n;
-    private final int[] order;        // unit indices by ascending score
-    private final int[] groupEnd;     // exclusive end (in order) of the tie group at each position
+    private final double[] scores;
     private final boolean[] positive;
+    private volatile Sorted sorted;   // built on first use: a DeLong interval never needs it
 
+    /** Units in ascending score order and, at each position, the exclusive end of its tie group. */
+    private record Sorted(int[] order, int[] groupEnd) {}
+
+    /** @param scores score per unit (kept, not copied: it must not change); @param positive class per unit */
     public RocAucStatistic(double[] scores, boolean[] positive) {
         if (scores.length != positive.length) throw new IllegalArgumentException("length mismatch");
         this.n = scores.length;
+        this.scores = scores;
         this.positive = positive.clone();
-        Integer[] boxed = new Integer[n];
-        for (int i = 0; i < n; i++) boxed[i] = i;
-        Arrays.sort(boxed, (a, b) -> Double.compare(scores[a], scores[b]));
-        order = new int[n];
-        for (int i = 0; i < n; i++) order[i] = boxed[i];
-        groupEnd = new int[n];
-        int start = 0;
-        while (start < n) {
-            int end = start + 1;
-            while (end < n && scores[order[end]] == scores[order[start]]) end++;
-            for (int j = start; j < end; j++) groupEnd[j] = end;
-            start = end;
+    }
+
+    /**
+     * Sorts once, with primitives only (a boxed index sort costs about 20 bytes a unit): the
+     * scores' order-preserving long keys are sorted, and each unit is then placed, in index order,
+     * at the next free position of its key's run. The order equals a stable sort by
+     * {@link Double#compare}; tie groups are runs of equal scores ({@code ==}, so -0.0 and 0.0
+     * share one).
+     */
+    private Sorted sorted() {
+        Sorted s = sorted;
+        if (s != null) return s;
+        synchronized (this) {
+            if (sorted != null) return sorted;
+            long[] keys = new long[n];
+            for (int i = 0; i < n; i++) keys[i] = key(scores[i]);
+            java.util.Arrays.sort(keys);
+            int[] order = new int[n];
+            int[] next = new int[n];   // placements made in the run starting at each position
+            for (int i = 0; i < n; i++) {
+                int start = firstAtLeast(keys, key(scores[i]));
+                order[start + next[start]++] = i;
+            }
+            int[] groupEnd = next;     // reused: the placement counts are no longer needed
+            int start = 0;
+            while (start < n) {
+                int end = start + 1;
+                while (end < n && scores[order[end]] == scores[order[start]]) end++;
+                for (int j = start; j < end; j++) groupEnd[j] = end;
+                start = end;
+            }
+            sorted = new Sorted(order, groupEnd);
+            return sorted;
         }
+    }
+
+    /** A long that sorts as {@link Double#compare} sorts the doubles (scores are never NaN). */
+    private static long key(double score) {
+        long bits = Double.doubleToLongBits(score);
+        return bits ^ ((bits >> 63) & 0x7fffffffffffffffL);
+    }
+
+    private static int firstAtLeast(long[] sorted, long key) {
+        int lo = 0;
+        int hi = sorted.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (sorted[mid] < key) lo = mid + 1; else hi = mid;
+        }
+        return lo;
     }
 
     @Override public int units() { return n; }
@@ -43,6 +84,8 @@ public final class RocAucStatistic implements Resampled {
 
     @Override
     public double value(int[] weights) {
+        int[] order = sorted().order();
+        int[] groupEnd = sorted().groupEnd();
         double u = 0, negBelow = 0, totalPos = 0;
         int start = 0;
         while (start < n) {
@@ -67,6 +110,8 @@ public final class RocAucStatistic implements Resampled {
      * for a negative, the count of positives above it. Unnormalised.
      */
     double[] placements() {
+        int[] order = sorted().order();
+        int[] groupEnd = sorted().groupEnd();
         double[] place = new double[n];
         int totalNeg = 0, totalPos = 0;
         for (boolean p : positive) { if (p) totalPos++; else totalNeg++; }

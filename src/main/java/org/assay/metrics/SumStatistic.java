@@ -5,8 +5,7 @@ import org.assay.stats.Resampled;
 /**
  * Binds a {@link SumMetric} to its unit table so the bootstrap can resample it with weights.
  * The jackknife subtracts one unit's statistics from the total sums: no re-run of the metric
- * over n-1 units. For one-hot tables the leave-one-out value depends only on the unit's cell,
- * so it is computed once per cell.
+ * over n-1 units. One-hot tables have their own statistic, {@link CellStatistic}.
  */
 public final class SumStatistic implements Resampled {
     private final UnitTable table;
@@ -40,21 +39,6 @@ public final class SumStatistic implements Resampled {
         double[] total = table.weightedSums(null);
         int n = table.units();
         double[] out = new double[n];
-        if (table instanceof OneHotUnitTable oneHot) {
-            double[] byCell = new double[oneHot.width()];
-            boolean[] done = new boolean[oneHot.width()];
-            for (int i = 0; i < n; i++) {
-                int c = oneHot.cellOf(i);
-                if (!done[c]) {
-                    total[c] -= 1;
-                    byCell[c] = metric.value(total);
-                    total[c] += 1;
-                    done[c] = true;
-                }
-                out[i] = byCell[c];
-            }
-            return out;
-        }
         double[] work = new double[total.length];
         for (int i = 0; i < n; i++) {
             System.arraycopy(total, 0, work, 0, total.length);

@@ -47,6 +47,11 @@ public final class PdfDocumentReader {
 
     /** The document's pages as selected (null selects all), each with its glyphs and rules. */
     public List<PageContent> read(Path file, String password, PageSelection pages) {
+        return read(file, password, pages, org.assay.common.Progress.NONE);
+    }
+
+    /** As {@link #read(Path, String, PageSelection)}, reporting each page read to {@code progress}. */
+    public List<PageContent> read(Path file, String password, PageSelection pages, org.assay.common.Progress progress) {
         checkFile(file);
         try (PDDocument doc = load(file, password)) {
             String title = doc.getDocumentInformation() == null ? null : doc.getDocumentInformation().getTitle();
@@ -59,7 +64,13 @@ public final class PdfDocumentReader {
             List<Integer> selected = pages == null ? PageSelection.all(count) : pages.resolve(count, file);
             List<PageContent> out = new ArrayList<>();
             GlyphCollector glyphs = new GlyphCollector();
-            for (int p : selected) out.add(readPage(file, doc, glyphs, p));
+            try (org.assay.common.Progress.Task task = progress.start("reading pages of " + file.getFileName(),
+                    selected.size())) {
+                for (int p : selected) {
+                    out.add(readPage(file, doc, glyphs, p));
+                    task.advance(1);
+                }
+            }
             if (out.stream().allMatch(pc -> pc.glyphs().stream().allMatch(Glyph::isSpace))) {
                 throw new UserInputException(file, null, "the PDF has no text layer (a scan?)",
                         "type the claims in, or run OCR first");

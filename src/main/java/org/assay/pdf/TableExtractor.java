@@ -19,7 +19,13 @@ public final class TableExtractor {
      * @param onlyTable the table number to keep ("3"), or null for every table
      */
     public Extraction extract(Path file, String password, PageSelection pages, String onlyTable) {
-        List<PageContent> content = reader.read(file, password, pages);
+        return extract(file, password, pages, onlyTable, org.assay.common.Progress.NONE);
+    }
+
+    /** As above, reporting the pages read to {@code progress}. */
+    public Extraction extract(Path file, String password, PageSelection pages, String onlyTable,
+                              org.assay.common.Progress progress) {
+        List<PageContent> content = reader.read(file, password, pages, progress);
         List<ExtractedTable> tables = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         for (PageContent page : content) {

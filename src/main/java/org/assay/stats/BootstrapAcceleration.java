@@ -10,11 +10,29 @@ package org.assay.stats;
 final class BootstrapAcceleration {
     private BootstrapAcceleration() {}
 
-    /** Acceleration from one leave-one-out value per unit. */
+    /**
+     * Acceleration from one leave-one-out value per unit: {@link #fromWeighted} with every
+     * multiplicity 1, the same sums in the same order, without an n-long array of ones.
+     */
     static double fromJackknife(double[] leaveOneOut) {
-        long[] once = new long[leaveOneOut.length];
-        java.util.Arrays.fill(once, 1L);
-        return fromWeighted(leaveOneOut, once);
+        double sum = 0;
+        for (int i = 0; i < leaveOneOut.length; i++) {
+            if (!Double.isFinite(leaveOneOut[i])) {
+                throw new IllegalArgumentException("jackknife value " + i + " is not finite: " + leaveOneOut[i]);
+            }
+            sum += leaveOneOut[i];
+        }
+        if (leaveOneOut.length < 2) throw new IllegalArgumentException("the jackknife needs at least 2 units");
+        double mean = sum / leaveOneOut.length;
+        double squares = 0;
+        double cubes = 0;
+        for (double value : leaveOneOut) {
+            double d = mean - value;
+            squares += d * d;
+            cubes += d * d * d;
+        }
+        if (squares == 0) return 0;
+        return cubes / (6 * Math.pow(squares, 1.5));
     }
 
     /**

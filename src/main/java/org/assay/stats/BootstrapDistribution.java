@@ -25,10 +25,17 @@ public final class BootstrapDistribution {
     private final long units;
     private final boolean countShortcut;
     private final boolean rescaled;
+    private final boolean categoryShortcut;
 
     /** {@code replicates} is taken over and sorted in place. */
     BootstrapDistribution(double estimate, double[] replicates, double acceleration, long units,
                           boolean countShortcut, boolean rescaled) {
+        this(estimate, replicates, acceleration, units, countShortcut, rescaled, false);
+    }
+
+    /** As above; {@code categoryShortcut} says the replicates came from multinomial category counts. */
+    BootstrapDistribution(double estimate, double[] replicates, double acceleration, long units,
+                          boolean countShortcut, boolean rescaled, boolean categoryShortcut) {
         Arrays.sort(replicates);
         this.estimate = estimate;
         this.sorted = replicates;
@@ -36,6 +43,7 @@ public final class BootstrapDistribution {
         this.units = units;
         this.countShortcut = countShortcut;
         this.rescaled = rescaled;
+        this.categoryShortcut = categoryShortcut;
     }
 
     /** The statistic on the data (every unit weighted 1). */
@@ -51,6 +59,9 @@ public final class BootstrapDistribution {
 
     /** True when the replicates were drawn as binomial counts instead of weight vectors. */
     public boolean countShortcut() { return countShortcut; }
+
+    /** True when the replicates were drawn as multinomial category counts instead of weight vectors. */
+    public boolean categoryShortcut() { return categoryShortcut; }
 
     /** True after {@link #withFinitePopulation(long, long)}. */
     public boolean finitePopulationRescaled() { return rescaled; }
@@ -91,7 +102,7 @@ public final class BootstrapDistribution {
             // an affine map with factor >= 0 keeps the order, and exact ties at the estimate
             scaled[b] = estimate + factor * (sorted[b] - estimate);
         }
-        return new BootstrapDistribution(estimate, scaled, acceleration, units, countShortcut, true);
+        return new BootstrapDistribution(estimate, scaled, acceleration, units, countShortcut, true, categoryShortcut);
     }
 
     /** Percentile interval [q(alpha/2), q(1 - alpha/2)] (Efron &amp; Tibshirani 1993 ch. 13). */

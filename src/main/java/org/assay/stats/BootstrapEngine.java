@@ -9,6 +9,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Supplier;
+import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
 /**
@@ -18,7 +19,9 @@ import org.assay.common.UserInputException;
  * <p>A resample is a vector of integer weights: n units drawn uniformly with replacement and
  * counted (multinomial counts summing to n), never a copy of the data (DESIGN.md principle 1).
  * Resample b draws its weights from a {@link SplittableRandom} seeded only by (seed, b), so
- * the replicates are bit-identical for any thread count (principle 5). Work is split into
+ * the replicates are bit-identical for any thread count (principle 5). A statistic of category
+ * counts ({@link CategoryCounts}) is resampled through those counts, and a proportion through
+ * its success count ({@link #runCount}): the same multinomial, drawn without n weights. Work is split into
  * contiguous blocks of resamples, one per thread; each thread reuses one weight buffer.
  *
  * <p>Limits: 100 &le; resamples &le; 10,000,000 (fewer than 100 cannot place a 95% endpoint
@@ -30,9 +33,14 @@ public final class BootstrapEngine {
     static final int MIN_RESAMPLES = 100;
     static final int MAX_RESAMPLES = 10_000_000;
 
+    /** Replicates a worker finishes before it reports progress: reporting stays rare next to the work. */
+    private static final int REPORT_EVERY = 64;
+
     private final int resamples;
     private final long seed;
     private final int threads;
+    private Progress progress = Progress.NONE;
+    private String label = "resampling";
 
     public BootstrapEngine(int resamples, long seed, int threads) {
         if (resamples < MIN_RESAMPLES || resamples > MAX_RESAMPLES) {
@@ -58,6 +66,7 @@ public final class BootstrapEngine {
      *     resample (naming the resample), or its jackknife has the wrong length
      */
     public BootstrapDistribution run(Resampled statistic) {
+        if (statistic instanceof CategoryCounts counts) return runCategories(counts);
         int n = statistic.units();
         requireUnits(n);
         double estimate = statistic.estimate();
@@ -68,7 +77,7 @@ public final class BootstrapEngine {
                     + " values for " + n + " units");
         }
         double acceleration = BootstrapAcceleration.fromJackknife(leaveOneOut);
-        double[] replicates = replicate(() -> {
+        double[] replicates = replicate(affordableWorkers(4L * n), () -> {
             int[] weights = new int[n]; // one buffer per worker, reused for every resample
             return rng -> {
                 Arrays.fill(weights, 0);
@@ -114,9 +123,67 @@ public final class BootstrapEngine {
             Arrays.fill(replicates, estimate);
         } else {
             BootstrapBinomialSampler sampler = new BootstrapBinomialSampler(n, estimate);
-            replicates = replicate(() -> rng -> (double) sampler.draw(rng) / n);
+            replicates = replicate(threads, () -> rng -> (double) sampler.draw(rng) / n);
         }
         return new BootstrapDistribution(estimate, replicates, acceleration, n, true, false);
+    }
+
+    /**
+     * Bootstraps a statistic of category counts: n units resampled with replacement fall into
+     * the categories as Multinomial(n, c_j / n) for observed counts c_j, drawn as a chain of
+     * conditional binomials (category j gets Binomial(units left, c_j / units in categories j and
+     * later), by exact inversion, {@link BinomialInversion}). The jackknife is closed-form: leaving
+     * out a unit of category j gives the statistic at c - e_j, with multiplicity c_j.
+     */
+    private BootstrapDistribution runCategories(CategoryCounts statistic) {
+        int n = statistic.units();
+        requireUnits(n);
+        long[] counts = statistic.categoryCounts();
+        long total = 0;
+        for (long c : counts) {
+            if (c < 0) throw new IllegalArgumentException("negative category count " + c);
+            total += c;
+        }
+        if (total != n) throw new IllegalArgumentException("category counts sum to " + total + ", not " + n);
+        double estimate = statistic.estimate();
+        requireFinite(estimate, "the statistic on the full data");
+        double[] leaveOneOut = new double[counts.length];
+        double[] work = new double[counts.length];
+        for (int j = 0; j < counts.length; j++) work[j] = counts[j];
+        for (int j = 0; j < counts.length; j++) {
+            if (counts[j] == 0) continue;
+            work[j] -= 1;
+            leaveOneOut[j] = statistic.valueOfCounts(work);
+            work[j] += 1;
+        }
+        double acceleration = BootstrapAcceleration.fromWeighted(leaveOneOut, counts);
+        double[] replicates = replicate(threads, () -> {
+            double[] drawn = new double[counts.length];   // one buffer per worker
+            return rng -> {
+                int left = n;
+                long inRest = n;   // observed units in categories j and later
+                for (int j = 0; j < counts.length; j++) {
+                    int x = left == 0 || counts[j] == 0 ? 0
+                            : counts[j] == inRest ? left
+                            : BinomialInversion.inverse(left, (double) counts[j] / inRest, rng.nextDouble());
+                    drawn[j] = x;
+                    left -= x;
+                    inRest -= counts[j];
+                }
+                return statistic.valueOfCounts(drawn);
+            };
+        });
+        return new BootstrapDistribution(estimate, replicates, acceleration, n, false, false, true);
+    }
+
+    /**
+     * Reports each run's resamples to {@code progress} under {@code label} ("resampling macro_f1");
+     * the replicates do not depend on it. Returns this engine.
+     */
+    public BootstrapEngine reportingTo(Progress progress, String label) {
+        this.progress = progress;
+        this.label = label;
+        return this;
     }
 
     public int resamples() { return resamples; }
@@ -130,16 +197,34 @@ public final class BootstrapEngine {
         double next(SplittableRandom rng);
     }
 
+    /**
+     * How many of the requested threads can each hold a buffer of {@code bytes}: at most half the
+     * heap still free. Ten million units take 40 MB of weights per worker, so sixteen cores would
+     * need 640 MB; the replicates do not depend on the number of workers, so fewer only takes longer.
+     */
+    private int affordableWorkers(long bytes) {
+        Runtime runtime = Runtime.getRuntime();
+        long free = runtime.maxMemory() - (runtime.totalMemory() - runtime.freeMemory());
+        return (int) Math.max(1, Math.min(threads, free / 2 / Math.max(1, bytes)));
+    }
+
     /** Fills replicates[b] for every b; each worker gets its own Replicate (and buffer). */
-    private double[] replicate(Supplier<Replicate> perWorker) {
+    private double[] replicate(int maxWorkers, Supplier<Replicate> perWorker) {
         double[] out = new double[resamples];
-        int workers = Math.min(threads, resamples);
-        if (workers == 1) {
-            fill(out, 0, resamples, perWorker.get());
-            return out;
+        int workers = Math.min(maxWorkers, resamples);
+        try (Progress.Task task = progress.start(label, resamples)) {
+            if (workers == 1) {
+                fill(out, 0, resamples, perWorker.get(), task);
+                return out;
+            }
+            fillInParallel(out, workers, perWorker, task);
         }
-        ExecutorService pool = Executors.newFixedThreadPool(workers, task -> {
-            Thread t = new Thread(task, "assay-bootstrap");
+        return out;
+    }
+
+    private void fillInParallel(double[] out, int workers, Supplier<Replicate> perWorker, Progress.Task task) {
+        ExecutorService pool = Executors.newFixedThreadPool(workers, runnable -> {
+            Thread t = new Thread(runnable, "assay-bootstrap");
             t.setDaemon(true);
             return t;
         });
@@ -148,7 +233,7 @@ public final class BootstrapEngine {
             for (int w = 0; w < workers; w++) {
                 int from = (int) ((long) resamples * w / workers);
                 int to = (int) ((long) resamples * (w + 1) / workers);
-                blocks.add(pool.submit(() -> fill(out, from, to, perWorker.get())));
+                blocks.add(pool.submit(() -> fill(out, from, to, perWorker.get(), task)));
             }
             for (Future<?> block : blocks) block.get();
         } catch (InterruptedException e) {
@@ -160,15 +245,16 @@ public final class BootstrapEngine {
         } finally {
             pool.shutdownNow();
         }
-        return out;
     }
 
-    private void fill(double[] out, int from, int to, Replicate replicate) {
+    private void fill(double[] out, int from, int to, Replicate replicate, Progress.Task task) {
         for (int b = from; b < to; b++) {
             double value = replicate.next(new SplittableRandom(resampleSeed(seed, b)));
             requireFinite(value, "bootstrap resample " + b);
             out[b] = value;
+            if ((b - from + 1) % REPORT_EVERY == 0) task.advance(REPORT_EVERY);
         }
+        task.advance((to - from) % REPORT_EVERY);
     }
 
     /**

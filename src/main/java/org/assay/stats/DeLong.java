@@ -48,57 +48,73 @@ public final class DeLong {
 
     /** Placement values of every item; a usage error when a class is empty or a score is NaN. */
     public static Placements placements(double[] scores, boolean[] positive) {
-        if (scores.length != positive.length) {
-            throw new IllegalArgumentException(scores.length + " scores but " + positive.length + " labels");
-        }
-        int m = 0;
-        for (int i = 0; i < scores.length; i++) {
-            if (Double.isNaN(scores[i])) {
-                throw UserInputException.usage("score of item " + (i + 1) + " is not a number",
-                        "give every item a numeric score");
-            }
-            if (positive[i]) m++;
-        }
-        int n = scores.length - m;
-        if (m == 0 || n == 0) {
-            throw UserInputException.usage("ROC AUC needs both classes, but there are " + m + " positives and "
-                    + n + " negatives", "evaluate on items from both classes");
-        }
-        double[] pos = new double[m];
-        double[] neg = new double[n];
-        for (int i = 0, a = 0, b = 0; i < scores.length; i++) {
-            if (positive[i]) pos[a++] = scores[i]; else neg[b++] = scores[i];
-        }
-        Arrays.sort(pos);
-        Arrays.sort(neg);
+        SortedClasses sorted = SortedClasses.of(scores, positive);
         double[] values = new double[scores.length];
         double sum = 0;
         for (int i = 0; i < scores.length; i++) {
-            if (positive[i]) {
-                values[i] = (firstAtLeast(neg, scores[i]) + 0.5 * ties(neg, scores[i])) / n;
-                sum += values[i];
-            } else {
-                int above = m - firstAbove(pos, scores[i]);
-                values[i] = (above + 0.5 * ties(pos, scores[i])) / m;
-            }
+            values[i] = sorted.placement(scores[i], positive[i]);
+            if (positive[i]) sum += values[i];
         }
-        return new Placements(values, positive.clone(), m, n, sum / m);
+        return new Placements(values, positive.clone(), sorted.pos.length, sorted.neg.length, sum / sorted.pos.length);
     }
 
-    /** AUC and its DeLong variance S10/m + S01/n (sample variances of the two sets of placements). */
+    /**
+     * AUC and its DeLong variance S10/m + S01/n (sample variances of the two sets of placements).
+     * The placements are computed twice (for the AUC, then for the deviations from it) rather than
+     * stored: the same values in the same order as {@link #placements}, without an n-long array.
+     */
     public static AucVariance of(double[] scores, boolean[] positive) {
-        Placements pl = placements(scores, positive);
-        double auc = pl.auc();
+        SortedClasses sorted = SortedClasses.of(scores, positive);
+        int m = sorted.pos.length;
+        int n = sorted.neg.length;
+        double sum = 0;
+        for (int i = 0; i < scores.length; i++) if (positive[i]) sum += sorted.placement(scores[i], true);
+        double auc = sum / m;
         double s10 = 0;
         double s01 = 0;
         for (int i = 0; i < scores.length; i++) {
-            double d = pl.values()[i] - auc;
+            double d = sorted.placement(scores[i], positive[i]) - auc;
             if (positive[i]) s10 += d * d; else s01 += d * d;
         }
-        int m = pl.positives();
-        int n = pl.negatives();
         double variance = (m < 2 || n < 2) ? Double.NaN : s10 / (m - 1) / m + s01 / (n - 1) / n;
         return new AucVariance(auc, variance, m, n);
+    }
+
+    /** The scores of each class, sorted once; placements are binary searches in the other class. */
+    private record SortedClasses(double[] pos, double[] neg) {
+        static SortedClasses of(double[] scores, boolean[] positive) {
+            if (scores.length != positive.length) {
+                throw new IllegalArgumentException(scores.length + " scores but " + positive.length + " labels");
+            }
+            int m = 0;
+            for (int i = 0; i < scores.length; i++) {
+                if (Double.isNaN(scores[i])) {
+                    throw UserInputException.usage("score of item " + (i + 1) + " is not a number",
+                            "give every item a numeric score");
+                }
+                if (positive[i]) m++;
+            }
+            int n = scores.length - m;
+            if (m == 0 || n == 0) {
+                throw UserInputException.usage("ROC AUC needs both classes, but there are " + m + " positives and "
+                        + n + " negatives", "evaluate on items from both classes");
+            }
+            double[] pos = new double[m];
+            double[] neg = new double[n];
+            for (int i = 0, a = 0, b = 0; i < scores.length; i++) {
+                if (positive[i]) pos[a++] = scores[i]; else neg[b++] = scores[i];
+            }
+            Arrays.sort(pos);
+            Arrays.sort(neg);
+            return new SortedClasses(pos, neg);
+        }
+
+        /** For a positive, the share of negatives below it; for a negative, of positives above; ties one half. */
+        double placement(double score, boolean isPositive) {
+            if (isPositive) return (firstAtLeast(neg, score) + 0.5 * ties(neg, score)) / neg.length;
+            int above = pos.length - firstAbove(pos, score);
+            return (above + 0.5 * ties(pos, score)) / pos.length;
+        }
     }
 
     /**

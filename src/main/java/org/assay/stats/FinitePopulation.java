@@ -7,9 +7,9 @@ import org.apache.commons.math3.distribution.HypergeometricDistribution;
  * {@code n} items from a finite test set of {@code N} items of which {@code K} are successes
  * (DESIGN.md principle 3). The sample count k then follows the hypergeometric distribution.
  *
- * <p>Probabilities come from Commons Math {@link HypergeometricDistribution} (Loader's
- * saddle-point pmf, tails summed term by term from the end of the support, so small tails keep
- * their relative accuracy). Commons Math takes {@code int} sizes, so N is limited to
+ * <p>Probabilities come from Commons Math {@link HypergeometricDistribution}'s pmf (Loader's
+ * saddle-point expansion), summed by {@link HypergeometricTails} only where the terms matter, so
+ * small tails keep their relative accuracy and a tail costs O(standard deviation) terms. Commons Math takes {@code int} sizes, so N is limited to
  * {@link Integer#MAX_VALUE}; larger values are rejected rather than truncated.
  */
 public final class FinitePopulation {
@@ -20,17 +20,17 @@ public final class FinitePopulation {
 
     /** P(X = k). */
     public static double pmf(long k, long n, long N, long K) {
-        return distribution(n, N, K).probability(clampToInt(k));
+        return tails(n, N, K).pmf(clampToInt(k));
     }
 
     /** P(X &lt;= k). */
     public static double cdf(long k, long n, long N, long K) {
-        return distribution(n, N, K).cumulativeProbability(clampToInt(k));
+        return tails(n, N, K).atMost(k);
     }
 
     /** P(X &gt; k), the survival function in scipy's sense. */
     public static double sf(long k, long n, long N, long K) {
-        return atLeast(distribution(n, N, K), k + 1);
+        return tails(n, N, K).atLeast(k + 1);
     }
 
     /**
@@ -63,7 +63,7 @@ public final class FinitePopulation {
         long hi = N;
         while (lo < hi) {
             long mid = lo + (hi - lo) / 2;
-            if (atLeast(distribution(n, N, mid), k) > halfAlpha) hi = mid; else lo = mid + 1;
+            if (tails(n, N, mid).atLeast(k) > halfAlpha) hi = mid; else lo = mid + 1;
         }
         long lowerK = lo;
         // Largest K whose lower tail P(X <= k | K) exceeds alpha/2; K = 0 always qualifies.
@@ -71,7 +71,7 @@ public final class FinitePopulation {
         hi = N - (n - k);
         while (lo < hi) {
             long mid = lo + (hi - lo + 1) / 2;
-            if (distribution(n, N, mid).cumulativeProbability((int) k) > halfAlpha) lo = mid; else hi = mid - 1;
+            if (tails(n, N, mid).atMost(k) > halfAlpha) lo = mid; else hi = mid - 1;
         }
         long upperK = lo;
         return new Interval((double) lowerK / N, (double) upperK / N, confidence, EXACT_METHOD);
@@ -85,9 +85,9 @@ public final class FinitePopulation {
      */
     public static double twoSidedPValue(long k, long n, long N, long K) {
         checkSample(k, n, N);
-        HypergeometricDistribution d = distribution(n, N, K);
-        double lowerTail = d.cumulativeProbability((int) k);
-        double upperTail = atLeast(d, k);
+        HypergeometricTails d = tails(n, N, K);
+        double lowerTail = d.atMost(k);
+        double upperTail = d.atLeast(k);
         return Math.min(1, 2 * Math.min(lowerTail, upperTail));
     }
 
@@ -99,8 +99,8 @@ public final class FinitePopulation {
      */
     public static long[] quantiles(long n, long N, long K, double lowerProb, double upperProb) {
         checkProbabilities(lowerProb, upperProb);
-        HypergeometricDistribution d = distribution(n, N, K);
-        return new long[] {d.inverseCumulativeProbability(lowerProb), d.inverseCumulativeProbability(upperProb)};
+        HypergeometricTails d = tails(n, N, K);
+        return new long[] {d.quantile(lowerProb), d.quantile(upperProb)};
     }
 
     /**
@@ -131,20 +131,14 @@ public final class FinitePopulation {
         }
     }
 
-    /** P(X &gt;= x), summed from the top of the support so a small tail stays accurate. */
-    private static double atLeast(HypergeometricDistribution d, long x) {
-        return d.upperCumulativeProbability(clampToInt(x));
-    }
-
-    private static HypergeometricDistribution distribution(long n, long N, long K) {
+    private static HypergeometricTails tails(long n, long N, long K) {
         if (N > Integer.MAX_VALUE) {
             throw new IllegalArgumentException("test-set size " + N + " is above " + Integer.MAX_VALUE);
         }
         if (N < 1 || n < 0 || n > N || K < 0 || K > N) {
             throw new IllegalArgumentException("need 0 <= n <= N and 0 <= K <= N, got n=" + n + ", N=" + N + ", K=" + K);
         }
-        // A null RandomGenerator: nothing is sampled, and the default RNG is costly to build.
-        return new HypergeometricDistribution(null, (int) N, (int) K, (int) n);
+        return new HypergeometricTails((int) n, (int) N, (int) K);
     }
 
     /** k outside the int range lies outside every support here; clamping keeps the answer exact. */

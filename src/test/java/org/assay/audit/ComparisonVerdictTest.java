@@ -26,7 +26,7 @@ class ComparisonVerdictTest {
     }
 
     private static ClassificationData data(String file, String[] ids, int[] truth, int[] predicted) {
-        return new ClassificationData(Path.of(file), ids, List.of("0", "1"), truth, predicted, null, null, 1, List.of());
+        return new ClassificationData(Path.of(file), List.of(ids), List.of("0", "1"), truth, predicted, null, null, 1, List.of());
     }
 
     @Test

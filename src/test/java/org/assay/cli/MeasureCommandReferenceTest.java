@@ -82,4 +82,16 @@ class MeasureCommandReferenceTest {
         assertThat(one.get("value").asDouble()).isCloseTo(PY.get("macro_f1").asDouble(), within(1e-12));
         assertThat(one.get("interval").get("method").asText()).contains("BCa");
     }
+
+    @Test
+    void theNotesSayWhenCountsWereDrawnDirectly() throws Exception {
+        // the issue asks the report to say when a resampling shortcut was used
+        JsonNode macro = measure("--metric", "macro_f1", "--resamples", "500");
+        assertThat(macro.get("notes").toString())
+                .contains("confusion-matrix counts drawn directly from Multinomial(n, observed cell shares)");
+        JsonNode accuracy = measure("--metric", "accuracy", "--interval", "bca", "--resamples", "500");
+        assertThat(accuracy.get("notes").toString()).contains("drawn directly from Binomial(n, k/n)");
+        JsonNode auc = measure("--metric", "roc_auc", "--interval", "bca", "--resamples", "500");
+        assertThat(auc.get("notes").toString()).doesNotContain("drawn directly");
+    }
 }

@@ -32,7 +32,7 @@ class ReportCommandsTest {
         assertThat(md).contains("## Provenance").contains("assay demo --out").contains("seed 20240917")
                 .contains(new ObjectMapper().readTree(out.resolve("report.json").toFile()).get("inputs").get(1).get("sha256").asText());
         // the cautions are always there, with how the subsample was drawn (the manifest's header)
-        assertThat(md).contains("## Cautions").contains("not a validation").contains("simple random sample without replacement of 400 from 4000 ids, seed 4427");
+        assertThat(md).contains("## Cautions").contains("not a validation").contains("simple random sample without replacement of 400 from 4000 ids, seed 4497");
         assertThat(Files.readString(out.resolve("replication-notes.md"))).contains("Deviations found").contains("Macro F1");
     }
 

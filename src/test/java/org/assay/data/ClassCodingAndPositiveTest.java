@@ -114,6 +114,6 @@ class ClassCodingAndPositiveTest {
         ClassificationData data = ClassificationReader.read(file, ReadOptions.defaults());
         assertThat(data.classes()).containsExactly("bird", "cat", "dog");
         assertThat(data.predicted()).containsExactly(0);
-        assertThat(data.probabilities()).containsExactly(0.5, 0.3, 0.2);
+        assertThat(data.probabilities().toArray()).containsExactly(0.5, 0.3, 0.2);
     }
 }

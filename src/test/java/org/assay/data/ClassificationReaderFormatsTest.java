@@ -43,7 +43,7 @@ class ClassificationReaderFormatsTest {
         // Not numbers, so lexicographic order; the file's column order (cat, dog, bird) does not matter.
         assertThat(data.classes()).containsExactly("bird", "cat", "dog");
         assertThat(data.truth()).containsExactly(1, 2, 0, 1, 2);
-        assertThat(data.probabilities()).containsExactly(
+        assertThat(data.probabilities().toArray()).containsExactly(
                 0.1, 0.7, 0.2,
                 0.3, 0.1, 0.6,
                 0.6, 0.2, 0.2,

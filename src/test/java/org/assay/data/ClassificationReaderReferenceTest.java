@@ -47,7 +47,7 @@ class ClassificationReaderReferenceTest {
         }
         if (expected.has("argmax")) {   // no prediction column in these fixtures: arg-max of probabilities
             assertThat(data.predicted()).containsExactly(ints(expected.get("argmax")));
-            assertThat(data.probabilities()).containsExactly(doubles(expected.get("probabilities")));
+            assertThat(data.probabilities().toArray()).containsExactly(doubles(expected.get("probabilities")));
         }
         if (expected.has("scores")) {
             assertThat(data.scores()).containsExactly(doubles(expected.get("scores")));

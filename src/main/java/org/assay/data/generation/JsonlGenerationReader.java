@@ -37,15 +37,15 @@ final class JsonlGenerationReader {
     }
 
     private GenerationData readAll() {
-        List<String> lines = TextLines.read(file, "outputs file");
         UniqueIds unique = new UniqueIds(file);
         List<String> ids = new ArrayList<>(), hypotheses = new ArrayList<>();
         List<List<String>> references = new ArrayList<>();
         List<Integer> emptyAt = new ArrayList<>();
-        for (int i = 0; i < lines.size(); i++) {
-            if (Whitespace.isBlank(lines.get(i))) continue;
-            line = i + 1;
-            JsonNode item = parse(lines.get(i));
+        // line by line: only what is extracted stays, never the whole file's text as well
+        TextLines.forEach(file, "outputs file", text -> {
+            line++;
+            if (Whitespace.isBlank(text)) return;
+            JsonNode item = parse(text);
             String id = id(item);
             unique.add(id, line);
             String hypothesis = hypothesis(item);
@@ -53,7 +53,7 @@ final class JsonlGenerationReader {
             ids.add(id);
             hypotheses.add(hypothesis);
             references.add(references(item));
-        }
+        });
         if (ids.isEmpty()) {
             throw new UserInputException(file, null, "the outputs file is empty",
                     "check that this is the right file and that it was written completely; each line holds " + EXAMPLE);

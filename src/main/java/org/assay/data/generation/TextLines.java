@@ -22,16 +22,30 @@ final class TextLines {
 
     static List<String> read(Path file, String what) {
         List<String> lines = new ArrayList<>();
+        forEach(file, what, lines::add);
+        return lines;
+    }
+
+    /** Receives each line of a file in turn. */
+    interface LineConsumer { void accept(String line); }
+
+    /**
+     * Passes the lines to {@code each} one at a time, as {@link #read} would list them, so a
+     * reader that keeps only what it extracts never holds the whole file.
+     */
+    static void forEach(Path file, String what, LineConsumer each) {
+        int count = 0;
         StringBuilder line = new StringBuilder();
         boolean carriageReturn = false;
         try (Reader in = new BufferedReader(TextFiles.openUtf8(file, what))) {
             int c;
             while ((c = in.read()) != -1) {
-                if (carriageReturn && c != '\n') throw loneCarriageReturn(file, lines.size() + 1);
+                if (carriageReturn && c != '\n') throw loneCarriageReturn(file, count + 1);
                 carriageReturn = c == '\r';
                 if (c == '\r') continue;
                 if (c == '\n') {
-                    lines.add(line.toString());
+                    count++;
+                    each.accept(line.toString());
                     line.setLength(0);
                 } else {
                     line.append((char) c);
@@ -41,9 +55,8 @@ final class TextLines {
             throw new UserInputException(file, null, "cannot read the " + what + ": " + e.getMessage(),
                     "check that the file exists and is readable", e);
         }
-        if (carriageReturn) throw loneCarriageReturn(file, lines.size() + 1);
-        if (line.length() > 0) lines.add(line.toString());
-        return lines;
+        if (carriageReturn) throw loneCarriageReturn(file, count + 1);
+        if (line.length() > 0) each.accept(line.toString());
     }
 
     private static UserInputException loneCarriageReturn(Path file, int line) {

@@ -1,9 +1,8 @@
 package org.assay.data.regression;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
-import org.apache.commons.math3.util.ResizableDoubleArray;
+import org.assay.common.Progress;
+import org.assay.data.DoubleColumn;
 import org.assay.data.TableRows;
 
 /**
@@ -16,7 +15,19 @@ public final class RegressionReader {
     private RegressionReader() {}
 
     public static RegressionData read(Path file, RegressionColumns columns) {
-        try (TableRows rows = TableRows.open(file, "predictions file")) {
+        return read(file, columns, Progress.NONE);
+    }
+
+    /** As {@link #read(Path, RegressionColumns)}, reporting the bytes read to {@code progress}. */
+    public static RegressionData read(Path file, RegressionColumns columns, Progress progress) {
+        long size;
+        try {
+            size = java.nio.file.Files.size(file);
+        } catch (java.io.IOException | RuntimeException e) {
+            size = 0;   // the reader reports a missing file
+        }
+        try (Progress.Task reading = progress.start("reading " + file.getFileName(), size);
+             TableRows rows = TableRows.open(file, "predictions file", reading)) {
             int id = rows.requireColumn(columns.id(), "the example ids",
                     "set --id-column to the column that holds the example ids");
             int target = rows.requireColumn(columns.target(), "the true values",
@@ -24,15 +35,14 @@ public final class RegressionReader {
             int prediction = rows.requireColumn(columns.prediction(), "the predicted values",
                     "set --prediction-column to the column that holds the predicted values");
             rows.requireFirstRow();
-            List<String> ids = new ArrayList<>();
-            ResizableDoubleArray truth = new ResizableDoubleArray();
-            ResizableDoubleArray predicted = new ResizableDoubleArray();
+            DoubleColumn truth = new DoubleColumn();
+            DoubleColumn predicted = new DoubleColumn();
             do {
-                ids.add(rows.uniqueId(id));
-                truth.addElement(rows.number(target));
-                predicted.addElement(rows.number(prediction));
+                rows.uniqueId(id);
+                truth.add(rows.number(target));
+                predicted.add(rows.number(prediction));
             } while (rows.next());
-            return new RegressionData(file, List.copyOf(ids), truth.getElements(), predicted.getElements());
+            return new RegressionData(file, rows.ids(), truth.toArray(), predicted.toArray());
         }
     }
 }

@@ -4,8 +4,8 @@ import java.util.Map;
 import java.util.Set;
 import org.assay.data.generation.GenerationData;
 import org.assay.metrics.MetricKind;
+import org.assay.metrics.CellStatistic;
 import org.assay.metrics.OneHotUnitTable;
-import org.assay.metrics.SumStatistic;
 
 /**
  * The share of items whose hypothesis equals one of its references, after the SQuAD answer
@@ -37,7 +37,7 @@ final class ExactMatch implements GenerationMetric {
                 }
             }
         }
-        SumStatistic statistic = new SumStatistic(new OneHotUnitTable(cell, 2), sums -> {
+        CellStatistic statistic = new CellStatistic(new OneHotUnitTable(cell, 2), sums -> {
             double total = sums[0] + sums[1];
             return total == 0 ? Double.NaN : sums[1] / total;
         });

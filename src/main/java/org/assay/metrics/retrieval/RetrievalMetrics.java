@@ -6,6 +6,7 @@ import java.util.Map;
 import java.util.Set;
 import org.assay.common.UserInputException;
 import org.assay.data.retrieval.RetrievalData;
+import org.assay.metrics.CellStatistic;
 import org.assay.metrics.OneHotUnitTable;
 import org.assay.metrics.SumStatistic;
 import org.assay.metrics.UnitMean;
@@ -160,7 +161,7 @@ public final class RetrievalMetrics {
                 hit[q] = data.firstRank(q) <= k;
                 cell[q] = hit[q] ? 1 : 0;
             }
-            SumStatistic s = new SumStatistic(new OneHotUnitTable(cell, 2), sums -> {
+            CellStatistic s = new CellStatistic(new OneHotUnitTable(cell, 2), sums -> {
                 double total = sums[0] + sums[1];
                 return total == 0 ? Double.NaN : sums[1] / total;
             });
