@@ -65,6 +65,7 @@ public final class Auditor {
 
             Map<String, Evidence> cache = new HashMap<>();
             Map<String, String> settingsOf = new HashMap<>();
+            Map<String, String> strata = stratumOfId(outputs, warnings);
             for (Claim c : table.claims()) {
                 if (!row.equals(c.row())) continue;
                 audited.add(c);
@@ -94,7 +95,7 @@ public final class Auditor {
                     if (evidence == null) {
                         PreparedMetric m = MetricRegistry.get(c.metric()).prepare(data, c.params());
                         if (m.notComputable() != null) throw UserInputException.usage(m.notComputable(), null);
-                        evidence = estimator.evidence(m, population);
+                        evidence = estimator.evidence(m, population, strata == null ? null : stratumOf(data, strata));
                         cache.put(key, evidence);
                         if (m.configuration() != null) settingsOf.put(key, m.configuration());
                     }
@@ -144,6 +145,35 @@ public final class Auditor {
             SubsampleManifests.Check check = SubsampleManifests.check(f.path());
             out.addAll(check.description());
             check.warnings().stream().filter(w -> !warnings.contains(w)).forEach(warnings::add);
+        }
+        return out;
+    }
+
+    /** Each id's stratum when the reproduction's manifest was drawn stratified by assay and can be read back, else null. */
+    private static Map<String, String> stratumOfId(Reproduction.Outputs outputs, List<String> warnings) {
+        for (InputFile f : outputs.inputs()) {
+            if (!f.role().startsWith("manifest")) continue;
+            try {
+                Map<String, String> strata = SubsampleManifests.strata(f.path());
+                if (strata != null) return strata;
+            } catch (UserInputException e) {
+                String w = f.path() + ": the strata of this stratified manifest cannot be read back (" + e.problem()
+                        + "), so its bootstrap intervals treat the draw as simple random";
+                if (!warnings.contains(w)) warnings.add(w);
+            }
+        }
+        return null;
+    }
+
+    /** The stratum index of every unit of {@code data}, or null when some unit has no stratum (then simple resampling). */
+    private static int[] stratumOf(EvaluationData data, Map<String, String> strata) {
+        List<String> ids = ReproductionPairing.unitIds(data);
+        Map<String, Integer> index = new java.util.LinkedHashMap<>();
+        int[] out = new int[ids.size()];
+        for (int i = 0; i < out.length; i++) {
+            String s = strata.get(ids.get(i));
+            if (s == null) return null;
+            out[i] = index.computeIfAbsent(s, k -> index.size());
         }
         return out;
     }

@@ -20,6 +20,15 @@ final class Estimator {
      * @param population full test-set size N, or null when unknown
      */
     Evidence evidence(PreparedMetric metric, Long population) {
+        return evidence(metric, population, null);
+    }
+
+    /**
+     * @param population full test-set size N, or null when unknown
+     * @param stratumOf  each unit's stratum when the subsample was drawn stratified, else null:
+     *                   bootstrap intervals then resample within the strata
+     */
+    Evidence evidence(PreparedMetric metric, Long population, int[] stratumOf) {
         MetricKind kind = metric.definition().kind();
         IntervalChoice choice = settings.interval().resolve(kind, metric.definition().id());
         long n = metric.units();
@@ -32,6 +41,12 @@ final class Estimator {
         BootstrapEngine engine = new BootstrapEngine(settings.resamples(), settings.seed(), settings.threads())
                 .reportingTo(progress, "resampling " + metric.definition().id());
         try {
+            if (stratumOf != null) {
+                BootstrapEvidence e = new BootstrapEvidence(engine.runStratified(metric.statistic(), stratumOf), choice, n,
+                        population);
+                e.notes().add("bootstrap resamples drawn within the strata of the stratified subsample");
+                return e;
+            }
             var raw = kind == MetricKind.COUNT
                     ? engine.runCount(metric.successes(), n)
                     : engine.run(metric.statistic());

@@ -86,8 +86,9 @@ public final class SubsampleManifests {
                     + " from " + header.getOrDefault("N", "?") + " ids, seed " + header.getOrDefault("seed", "?")
                     + (stratified ? ", by " + header.getOrDefault("stratify by", "?") + " (" + header.getOrDefault("allocation", "") + ")" : ""));
             if (stratified) {
-                description.add("The intervals treat this stratified draw as a simple random sample, which with "
-                        + "proportional allocation makes them somewhat wider than a stratified analysis would");
+                description.add("Bootstrap intervals resample within these strata; the exact intervals of count metrics "
+                        + "and DeLong's for ROC AUC treat the draw as simple random, which with proportional allocation "
+                        + "makes them somewhat wider than a stratified analysis would");
             }
             String redraw = redraw(manifestFile, header, m.ids());
             if (redraw != null) warnings.add(redraw);
@@ -99,6 +100,24 @@ public final class SubsampleManifests {
         String block = contiguous(m.ids(), header == null ? null : idList(manifestFile, header));
         if (block != null) warnings.add(name + ": " + block);
         return new Check(warnings, description, stratified);
+    }
+
+    /**
+     * Each listed id's stratum, read from the id list the header names, when the manifest is an
+     * assay stratified draw; null for any other manifest. Fails when the id list cannot be read.
+     */
+    public static Map<String, String> strata(Path manifestFile) {
+        Manifest m = Manifest.describe(manifestFile);
+        Map<String, String> header = header(m.comments());
+        if (header == null || !header.getOrDefault("method", "").startsWith("stratified")) return null;
+        IdList list = idList(manifestFile, header);
+        if (list == null || list.strata() == null) {
+            throw new UserInputException(manifestFile, null, "its id list " + header.get("id list") + " is not found",
+                    "keep the id list next to the manifest, where its header says");
+        }
+        Map<String, String> out = new HashMap<>();
+        for (int i = 0; i < list.size(); i++) out.put(list.ids().get(i), list.strata().get(i));
+        return out;
     }
 
     /** Null when the header redraws to exactly these ids; otherwise why not. */

@@ -89,6 +89,43 @@ public final class BootstrapEngine {
     }
 
     /**
+     * The stratified bootstrap: each resample draws, within every stratum, as many units as the
+     * stratum has, with replacement (Efron & Tibshirani 1993, An Introduction to the Bootstrap,
+     * §3.6's two-sample case generalised to strata), so each stratum keeps its share of the sample
+     * as a stratified draw does. The estimate is unchanged (a proportional allocation is
+     * self-weighting); only the spread reflects the design. The BCa acceleration uses the
+     * ordinary jackknife over all units.
+     *
+     * @param stratumOf each unit's stratum, 0..S-1
+     */
+    public BootstrapDistribution runStratified(Resampled statistic, int[] stratumOf) {
+        int n = statistic.units();
+        requireUnits(n);
+        if (stratumOf.length != n) throw new IllegalArgumentException(stratumOf.length + " strata for " + n + " units");
+        int strata = Arrays.stream(stratumOf).max().orElse(0) + 1;
+        int[] size = new int[strata];
+        for (int s : stratumOf) size[s]++;
+        int[][] members = new int[strata][];
+        int[] fill = new int[strata];
+        for (int h = 0; h < strata; h++) members[h] = new int[size[h]];
+        for (int i = 0; i < n; i++) members[stratumOf[i]][fill[stratumOf[i]]++] = i;
+        double estimate = statistic.estimate();
+        requireFinite(estimate, "the statistic on the full data");
+        double acceleration = BootstrapAcceleration.fromJackknife(statistic.jackknife());
+        double[] replicates = replicate(affordableWorkers(4L * n), () -> {
+            int[] weights = new int[n];
+            return rng -> {
+                Arrays.fill(weights, 0);
+                for (int[] m : members) {
+                    for (int draw = 0; draw < m.length; draw++) weights[m[rng.nextInt(m.length)]]++;
+                }
+                return statistic.value(weights);
+            };
+        });
+        return new BootstrapDistribution(estimate, replicates, acceleration, n, false, false);
+    }
+
+    /**
      * Bootstraps the proportion {@code successes / trials} of 0/1 values without building
      * weights. Resampling n such values with replacement makes the resampled count
      * Binomial(n, k/n), so each replicate is one exact draw of that count (by inverse CDF,

@@ -115,4 +115,38 @@ class SampleCommandTest {
         assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("drawn.txt: simple random sample without replacement of 400 from 4000 ids, seed 4497")
                 .contains("Redrawn from its header");
     }
+
+    @Test
+    void aStratifiedManifestMakesTheAuditResampleWithinItsStrata() throws Exception {
+        StringBuilder csv = new StringBuilder("id,label\n");
+        for (int i = 0; i < 600; i++) csv.append("s").append(i).append(',').append(i % 3 == 0 ? "wren" : i % 3 == 1 ? "robin" : "finch").append('\n');
+        Files.writeString(tmp.resolve("labels.csv"), csv);
+        assertThat(CliRun.of("sample", tmp.resolve("labels.csv").toString(), "--id-column", "id", "--stratify-by", "label",
+                "--n", "90", "--out", tmp.resolve("strat.txt").toString()).exitCode()).isZero();
+        List<String> drawn = Files.readAllLines(tmp.resolve("strat.txt")).stream().filter(l -> !l.startsWith("#")).toList();
+        StringBuilder preds = new StringBuilder("id,label,prediction\n");
+        for (int j = 0; j < drawn.size(); j++) {
+            int i = Integer.parseInt(drawn.get(j).substring(1));
+            String label = i % 3 == 0 ? "wren" : i % 3 == 1 ? "robin" : "finch";
+            preds.append(drawn.get(j)).append(',').append(label).append(',').append(j % 4 == 0 ? "wren" : label).append('\n');
+        }
+        Files.writeString(tmp.resolve("preds.csv"), preds);
+        Files.writeString(tmp.resolve("claims.yaml"), """
+                tables:
+                  - id: T1
+                    test_size: 600
+                    claims:
+                      - {row: Ours, column: [Macro F1], metric: macro_f1, value: "80.0", scale: percent}
+                      - {row: Ours, column: [Accuracy], metric: accuracy, value: "80.0", scale: percent}
+                """);
+        CliRun run = CliRun.of("audit", "--claims", tmp.resolve("claims.yaml").toString(), "--predictions",
+                tmp.resolve("preds.csv").toString(), "--manifest", tmp.resolve("strat.txt").toString(),
+                "--out", tmp.resolve("r").toString(), "--resamples", "300");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        var findings = new com.fasterxml.jackson.databind.ObjectMapper().readTree(tmp.resolve("r/report.json").toFile()).get("findings");
+        assertThat(findings.get(0).get("notes").toString()).contains("within the strata of the stratified subsample");
+        // the count metric keeps its exact interval, which the report says treats the draw as simple random
+        assertThat(findings.get(1).get("interval").get("method").asText()).contains("hypergeometric");
+        assertThat(Files.readString(tmp.resolve("r/report.md"))).contains("Bootstrap intervals resample within these strata");
+    }
 }
