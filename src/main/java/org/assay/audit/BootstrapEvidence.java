@@ -38,11 +38,7 @@ final class BootstrapEvidence implements Evidence {
 
     @Override
     public Interval interval(double confidence) {
-        return switch (choice) {
-            case PERCENTILE -> distribution.percentile(confidence);
-            case BASIC -> distribution.basic(confidence);
-            default -> distribution.bca(confidence);
-        };
+        return choice.of(distribution, confidence);
     }
 
     @Override public double pValue(double lo, double hi) { return distribution.twoSidedPValue(lo, hi); }

@@ -59,4 +59,13 @@ public enum IntervalChoice {
         throw UserInputException.usage("unknown interval method '" + text + "'",
                 "choose one of " + Arrays.stream(values()).map(IntervalChoice::id).collect(Collectors.joining(", ")));
     }
+
+    /** The bootstrap interval this choice names (BCa for any choice that is not a bootstrap method). */
+    org.assay.stats.Interval of(org.assay.stats.BootstrapDistribution distribution, double confidence) {
+        return switch (this) {
+            case PERCENTILE -> distribution.percentile(confidence);
+            case BASIC -> distribution.basic(confidence);
+            default -> distribution.bca(confidence);
+        };
+    }
 }

@@ -33,11 +33,7 @@ final class PairedBootstrapEvidence implements PairedEvidence {
 
     @Override
     public Interval interval(double confidence) {
-        return switch (choice) {
-            case PERCENTILE -> distribution.percentile(confidence);
-            case BASIC -> distribution.basic(confidence);
-            default -> distribution.bca(confidence);
-        };
+        return choice.of(distribution, confidence);
     }
 
     @Override public double pValue() { return distribution.twoSidedPValue(0, 0); }
