@@ -8,6 +8,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 /**
@@ -33,10 +34,9 @@ public final class ClaimsReader {
     static String readText(Path file) {
         byte[] bytes;
         try {
-            if (Files.size(file) > InputLimits.MAX_FILE_BYTES) {
-                throw new UserInputException(file, null,
-                        "the file is larger than " + InputLimits.MAX_FILE_BYTES / (1024 * 1024) + " MB",
-                        "split the claims into smaller files");
+            long size = Files.size(file);
+            if (Limit.CLAIMS_BYTES.exceededBy(size)) {
+                throw Limit.CLAIMS_BYTES.exceeded(file, null, "the file has " + size + " bytes");
             }
             bytes = Files.readAllBytes(file);
         } catch (NoSuchFileException e) {

@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.regex.Pattern;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 /**
@@ -36,12 +37,15 @@ final class CsvTreeReader {
             List.of("row", "metric", "value", "scale", "pm", "pm_kind", "page", "margin");
     private static final Pattern COLUMN_SEPARATOR = Pattern.compile(Pattern.quote(" / "));
 
-    private static final CsvFactory FACTORY = CsvFactory.builder()
-            .enable(CsvParser.Feature.WRAP_AS_ARRAY)
-            .enable(CsvParser.Feature.SKIP_EMPTY_LINES)
-            .streamReadConstraints(StreamReadConstraints.builder()
-                    .maxDocumentLength(InputLimits.MAX_FILE_BYTES).build())
-            .build();
+    /** A factory with the limits in force (they can change between commands). */
+    private static CsvFactory factory() {
+        return CsvFactory.builder()
+                .enable(CsvParser.Feature.WRAP_AS_ARRAY)
+                .enable(CsvParser.Feature.SKIP_EMPTY_LINES)
+                .streamReadConstraints(StreamReadConstraints.builder()
+                        .maxDocumentLength(Limit.CLAIMS_BYTES.value()).build())
+                .build();
+    }
 
     private record Row(int line, List<String> cells) {}
 
@@ -187,7 +191,7 @@ final class CsvTreeReader {
 
     private static List<Row> rows(Path file, String text) {
         List<Row> rows = new ArrayList<>();
-        try (JsonParser parser = FACTORY.createParser(text)) {
+        try (JsonParser parser = factory().createParser(text)) {
             try {
                 // WRAP_AS_ARRAY gives one outer array holding one array per row. The location of a
                 // row's START_ARRAY is stale, so a row's line is that of its first cell.

@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 /**
@@ -23,17 +24,20 @@ import org.assay.common.UserInputException;
  * {@link StreamReadConstraints}, so a hostile file fails with a message, not a stack overflow.
  */
 final class JsonTreeReader {
-    private static final JsonFactory FACTORY = JsonFactory.builder()
-            .streamReadConstraints(StreamReadConstraints.builder()
-                    .maxNestingDepth(InputLimits.MAX_DEPTH)
-                    .maxDocumentLength(InputLimits.MAX_FILE_BYTES)
-                    .build())
-            .build();
+    /** A factory with the limits in force (they can change between commands). */
+    private static JsonFactory factory() {
+        return JsonFactory.builder()
+                .streamReadConstraints(StreamReadConstraints.builder()
+                        .maxNestingDepth(Limit.DEPTH.intValue())
+                        .maxDocumentLength(Limit.CLAIMS_BYTES.value())
+                        .build())
+                .build();
+    }
 
     private JsonTreeReader() {}
 
     static TreeNode read(Path file, String text) {
-        try (JsonParser parser = FACTORY.createParser(text)) {
+        try (JsonParser parser = factory().createParser(text)) {
             try {
                 if (parser.nextToken() == null) {
                     throw new UserInputException(file, null, "the file is empty",
@@ -47,9 +51,13 @@ final class JsonTreeReader {
                 }
                 return root;
             } catch (StreamConstraintsException e) {
-                throw new UserInputException(file, position(parser, parser.currentLocation()),
-                        "the JSON is nested or sized beyond the limits for a claims file: " + e.getOriginalMessage(),
-                        "a claims file needs about six levels of nesting; check the brackets", e);
+                String m = String.valueOf(e.getOriginalMessage());
+                Limit limit = m.contains("nesting depth") || m.contains("Depth") ? Limit.DEPTH : Limit.CLAIMS_BYTES;
+                UserInputException u = limit.exceeded(file, position(parser, parser.currentLocation()),
+                        "the JSON is " + (limit == Limit.DEPTH ? "nested too deeply (a claims file needs about six levels)"
+                                : "too long"));
+                u.initCause(e);
+                throw u;
             } catch (JsonProcessingException e) {
                 JsonLocation where = e.getLocation() != null ? e.getLocation() : parser.currentLocation();
                 throw new UserInputException(file, position(parser, where),

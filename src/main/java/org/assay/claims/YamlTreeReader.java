@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.composer.Composer;
@@ -43,9 +44,9 @@ final class YamlTreeReader {
 
     static TreeNode read(Path file, String text) {
         LoaderOptions options = new LoaderOptions();
-        options.setMaxAliasesForCollections(InputLimits.MAX_COLLECTION_ALIASES);
-        options.setNestingDepthLimit(InputLimits.MAX_DEPTH);
-        options.setCodePointLimit(InputLimits.MAX_FILE_BYTES);
+        options.setMaxAliasesForCollections(Limit.YAML_ALIASES.intValue());
+        options.setNestingDepthLimit(Limit.DEPTH.intValue());
+        options.setCodePointLimit(Limit.CLAIMS_BYTES.intValue());
         options.setAllowRecursiveKeys(false);
         GuardedParser parser = new GuardedParser(new ParserImpl(new StreamReader(text), options), file);
         Composer composer = new Composer(parser, new Resolver(), options);
@@ -78,25 +79,25 @@ final class YamlTreeReader {
         return new Converter(file).convert(root, 1);
     }
 
+    private static UserInputException withCause(UserInputException u, Throwable cause) {
+        u.initCause(cause);
+        return u;
+    }
+
     /** SnakeYAML reports its limits without a position; the parser's last event gives the line. */
     private static UserInputException limitError(Path file, int line, YAMLException e) {
         String m = String.valueOf(e.getMessage());
         String position = line > 0 ? "line " + line : null;
         if (m.startsWith("Number of aliases")) {
-            return new UserInputException(file, position,
-                    "too many YAML aliases to mappings or sequences (more than "
-                            + InputLimits.MAX_COLLECTION_ALIASES + "); the file may be an alias bomb",
-                    "write the values out instead of repeating them with *aliases", e);
+            return withCause(Limit.YAML_ALIASES.exceeded(file, position,
+                    "too many YAML aliases to mappings or sequences; the file may be an alias bomb"), e);
         }
         if (m.startsWith("Nesting Depth")) {
-            return new UserInputException(file, position,
-                    "mappings and sequences are nested more than " + InputLimits.MAX_DEPTH + " levels deep",
-                    "a claims file needs about six levels; check the indentation", e);
+            return withCause(Limit.DEPTH.exceeded(file, position,
+                    "mappings and sequences are nested too deeply (a claims file needs about six levels)"), e);
         }
         if (m.contains("code points")) {
-            return new UserInputException(file, position,
-                    "the file is larger than " + InputLimits.MAX_FILE_BYTES + " characters",
-                    "split the claims into smaller files", e);
+            return withCause(Limit.CLAIMS_BYTES.exceeded(file, position, "the file has too many characters"), e);
         }
         return new UserInputException(file, position, "cannot read the YAML: " + m,
                 "check the YAML syntax near this line", e);
@@ -158,17 +159,13 @@ final class YamlTreeReader {
         TreeNode convert(Node node, int depth) {
             int line = node.getStartMark().getLine() + 1;
             if (depth == 2) topLine = line;
-            if (++nodes > InputLimits.MAX_EXPANDED_NODES) {
-                throw new UserInputException(file, "line " + topLine,
-                        "the YAML expands to more than " + InputLimits.MAX_EXPANDED_NODES
-                                + " values through aliases; the file may be an alias bomb",
-                        "write the values out instead of repeating them with *aliases");
+            if (Limit.YAML_VALUES.exceededBy(++nodes)) {
+                throw Limit.YAML_VALUES.exceeded(file, "line " + topLine,
+                        "the YAML expands to too many values through aliases; the file may be an alias bomb");
             }
-            if (depth > InputLimits.MAX_DEPTH) {
-                throw new UserInputException(file, "line " + line,
-                        "values are nested more than " + InputLimits.MAX_DEPTH
-                                + " levels deep (an alias may refer to a node that contains it)",
-                        "remove the *alias that points back into its own anchor");
+            if (Limit.DEPTH.exceededBy(depth)) {
+                throw Limit.DEPTH.exceeded(file, "line " + line,
+                        "values are nested too deeply (an alias may refer to a node that contains it)");
             }
             if (node instanceof ScalarNode s) {
                 TreeNode.Kind kind = kindOf(s.getTag());

@@ -5,6 +5,7 @@ import java.io.InputStream;
 import java.io.PrintWriter;
 import java.util.Properties;
 import java.util.function.LongSupplier;
+import org.assay.common.Limits;
 import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 import picocli.CommandLine;
@@ -37,6 +38,13 @@ public final class Main implements Runnable {
             description = "Print stack traces for errors.")
     boolean debug;
 
+    @Option(names = "--limit", scope = CommandLine.ScopeType.INHERIT, paramLabel = "NAME=VALUE",
+            description = "Raise (or lower) one of the limits that protect against hostile files, for a "
+                    + "genuinely larger input: file-bytes, line-chars, rows, columns, depth, claims-bytes, "
+                    + "yaml-aliases, yaml-values, pdf-bytes, pdf-pages, pdf-operators, pdf-page-millis, "
+                    + "template-bytes. Values take k, M, G suffixes. Repeatable.")
+    java.util.Map<String, String> limits;
+
     @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
     /** Where long steps report progress: a terminal line, or nothing (see {@link #progressFor}). */
@@ -62,6 +70,22 @@ public final class Main implements Runnable {
      */
     static Progress progressFor(boolean terminal, PrintWriter err, LongSupplier clock) {
         return terminal ? new TerminalProgress(err, clock) : Progress.NONE;
+    }
+
+    /**
+     * The limits the command line sets with {@code --limit}, wherever on the line it stands
+     * (before or after the command name). A bad name or value is a usage error.
+     */
+    private static Limits limitsOf(CommandLine.ParseResult parsed) {
+        java.util.Map<String, String> settings = new java.util.LinkedHashMap<>();
+        for (CommandLine.ParseResult p = parsed; p != null; p = p.subcommand()) {
+            if (p.hasMatchedOption("--limit")) settings.putAll(p.matchedOptionValue("--limit", java.util.Map.of()));
+        }
+        try {
+            return Limits.parse(settings);
+        } catch (UserInputException e) {
+            throw new CommandLine.ParameterException(parsed.commandSpec().commandLine(), e.oneLine());
+        }
     }
 
     /** Runs the command line and returns the exit code, with no progress display; used by the tests. */
@@ -95,6 +119,7 @@ public final class Main implements Runnable {
             err.flush();
             return BAD_INPUT;
         });
+        cl.setExecutionStrategy(parsed -> limitsOf(parsed).runWith(() -> new CommandLine.RunLast().execute(parsed)));
         int code = cl.execute(args);
         out.flush();
         return code;

@@ -2,9 +2,12 @@ package org.assay.data;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.dataformat.csv.CsvFactory;
 import com.fasterxml.jackson.dataformat.csv.CsvMapper;
 import com.fasterxml.jackson.dataformat.csv.CsvParser;
 import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 import java.io.IOException;
@@ -34,6 +37,7 @@ final class DelimitedRowSource implements RowSource {
     private final char separator;
     private String[] current;
     private int line;
+    private long dataRows;
 
     DelimitedRowSource(Path file, Reader reader, char separator) {
         this.file = file;
@@ -41,7 +45,11 @@ final class DelimitedRowSource implements RowSource {
         this.separator = separator;
         CsvSchema schema = CsvSchema.emptySchema().withColumnSeparator(separator);
         try {
-            this.rows = new CsvMapper().readerFor(String[].class)
+            CsvFactory factory = CsvFactory.builder()
+                    .streamReadConstraints(StreamReadConstraints.builder()
+                            .maxStringLength(Limit.LINE_CHARS.intValue()).build())
+                    .build();
+            this.rows = new CsvMapper(factory).readerFor(String[].class)
                     .with(schema)
                     .with(CsvParser.Feature.WRAP_AS_ARRAY)
                     .with(CsvParser.Feature.SKIP_EMPTY_LINES)
@@ -57,6 +65,9 @@ final class DelimitedRowSource implements RowSource {
     }
 
     private void checkHeader() {
+        if (Limit.COLUMNS.exceededBy(columns.size())) {
+            throw Limit.COLUMNS.exceeded(file, RowErrors.line(headerLine), "the header has " + columns.size() + " columns");
+        }
         Map<String, Integer> seen = new HashMap<>();
         for (int i = 0; i < columns.size(); i++) {
             Integer before = seen.putIfAbsent(columns.get(i), i);
@@ -77,6 +88,9 @@ final class DelimitedRowSource implements RowSource {
     @Override
     public boolean next() {
         if (!advance()) return false;
+        if (Limit.ROWS.exceededBy(++dataRows)) {
+            throw Limit.ROWS.exceeded(file, RowErrors.line(line), "the file has more than " + Limit.ROWS.value() + " rows");
+        }
         if (current.length != columns.size()) {
             String name = separator == '\t' ? "tab" : "comma";
             throw new UserInputException(file, RowErrors.line(line),

@@ -1,12 +1,16 @@
 package org.assay.data;
 
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import com.fasterxml.jackson.databind.cfg.JsonNodeFeature;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 import java.io.BufferedReader;
@@ -32,7 +36,11 @@ final class JsonLinesRowSource implements RowSource {
     private final Path file;
     private final BufferedReader reader;
     private final ReadOptions options;
-    private final ObjectMapper mapper = JsonMapper.builder()
+    private final ObjectMapper mapper = JsonMapper.builder(JsonFactory.builder()
+                    .streamReadConstraints(StreamReadConstraints.builder()
+                            .maxNestingDepth(Limit.DEPTH.intValue())
+                            .maxStringLength(Limit.LINE_CHARS.intValue()).build())
+                    .build())
             .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -45,6 +53,7 @@ final class JsonLinesRowSource implements RowSource {
     private Map<String, String> pending;   // the first object, read ahead to learn the columns
     private int lineNumber;
     private int line;
+    private long rows;
 
     JsonLinesRowSource(Path file, Reader reader, ReadOptions options) {
         this.file = file;
@@ -54,6 +63,9 @@ final class JsonLinesRowSource implements RowSource {
         if (pending == null) throw RowErrors.empty(file, "file");
         headerLine = lineNumber;
         columns = List.copyOf(pending.keySet());
+        if (Limit.COLUMNS.exceededBy(columns.size())) {
+            throw Limit.COLUMNS.exceeded(file, RowErrors.line(headerLine), "the first object has " + columns.size() + " fields");
+        }
         for (int i = 0; i < columns.size(); i++) index.put(columns.get(i), i);
     }
 
@@ -69,6 +81,9 @@ final class JsonLinesRowSource implements RowSource {
         pending = null;
         if (fields == null) return false;
         line = lineNumber;
+        if (Limit.ROWS.exceededBy(++rows)) {
+            throw Limit.ROWS.exceeded(file, RowErrors.line(line), "the file has more than " + Limit.ROWS.value() + " rows");
+        }
         String[] values = new String[columns.size()];
         for (Map.Entry<String, String> field : fields.entrySet()) {
             Integer at = index.get(field.getKey());
@@ -106,6 +121,8 @@ final class JsonLinesRowSource implements RowSource {
         JsonNode node;
         try {
             node = mapper.readTree(text);
+        } catch (StreamConstraintsException e) {
+            throw Limit.DEPTH.exceeded(file, RowErrors.line(lineNumber), "the JSON on this line is nested too deeply");
         } catch (JsonProcessingException e) {
             // Jackson counts lines within the one line it was given; report the file line.
             throw new UserInputException(file, RowErrors.line(lineNumber),

@@ -1,5 +1,6 @@
 package org.assay.data;
 
+import org.assay.common.Limit;
 import org.assay.common.Progress;
 import org.assay.common.UserInputException;
 
@@ -40,6 +41,9 @@ final class StrictUtf8Reader extends Reader {
     private boolean atStart = true;
     /** Newlines delivered to the caller or sitting decoded in {@link #chars}. */
     private long newlines;
+    /** Characters decoded since the last newline: a line beyond {@link Limit#LINE_CHARS} stops the read. */
+    private long lineChars;
+    private final long maxLineChars = Limit.LINE_CHARS.value();
 
     private StrictUtf8Reader(Path file, InputStream in, Progress.Task progress) {
         this.file = file;
@@ -65,6 +69,10 @@ final class StrictUtf8Reader extends Reader {
                     "give the path of the file itself");
         }
         try {
+            long size = Files.size(file);
+            if (Limit.FILE_BYTES.exceededBy(size)) {
+                throw Limit.FILE_BYTES.exceeded(file, null, what + " has " + size + " bytes");
+            }
             return new StrictUtf8Reader(file, Files.newInputStream(file), progress);
         } catch (IOException e) {
             throw new UserInputException(file, null, "cannot read " + what + ": " + e.getMessage(),
@@ -123,7 +131,15 @@ final class StrictUtf8Reader extends Reader {
     }
 
     private void countNewlines(CharBuffer buffer, int from, int to) {
-        for (int i = from; i < to; i++) if (buffer.get(i) == '\n') newlines++;
+        for (int i = from; i < to; i++) {
+            if (buffer.get(i) == '\n') {
+                newlines++;
+                lineChars = 0;
+            } else if (++lineChars > maxLineChars) {
+                throw Limit.LINE_CHARS.exceeded(file, "line " + (newlines + 1),
+                        "the line is longer than " + maxLineChars + " characters");
+            }
+        }
     }
 
     private UserInputException malformed() {

@@ -34,7 +34,7 @@ public final class PdfDocumentReader {
 
     public PdfDocumentReader(PdfLimits limits) { this.limits = limits; }
 
-    public PdfDocumentReader() { this(PdfLimits.DEFAULT); }
+    public PdfDocumentReader() { this(PdfLimits.current()); }
 
     private static java.util.logging.Logger quiet(String name) {
         java.util.logging.Logger log = java.util.logging.Logger.getLogger(name);
@@ -58,8 +58,9 @@ public final class PdfDocumentReader {
             lastTitle = title == null || title.isBlank() ? null : title.strip();
             int count = doc.getNumberOfPages();
             if (count > limits.maxPages()) {
-                throw new UserInputException(file, null, "the PDF has " + count + " pages, more than the limit of "
-                        + limits.maxPages(), "extract the pages with the tables into a smaller PDF, or use --pages");
+                throw new UserInputException(file, null, "the PDF has " + count + " pages (limit pdf-pages is "
+                        + limits.maxPages() + ")", "extract the pages with the tables into a smaller PDF, or raise the"
+                        + " limit with --limit pdf-pages=N");
             }
             List<Integer> selected = pages == null ? PageSelection.all(count) : pages.resolve(count, file);
             List<PageContent> out = new ArrayList<>();
@@ -96,7 +97,9 @@ public final class PdfDocumentReader {
             return new PageContent(p, box.getWidth(), box.getHeight(), g, r);
         } catch (PageBudget.Exceeded e) {
             throw new UserInputException(file, "page " + p, "reading the page exceeded " + e.getMessage()
-                    + " (a looping or bloated content stream)", "use --pages to skip this page");
+                    + " (a looping or bloated content stream; limit " + e.limit().key() + ")",
+                    "use --pages to skip this page, or if the page is genuine raise the limit with --limit "
+                            + e.limit().key() + "=N");
         } catch (StackOverflowError e) {
             throw new UserInputException(file, "page " + p, "the page's content is nested too deeply to read",
                     "use --pages to skip this page");
@@ -132,8 +135,9 @@ public final class PdfDocumentReader {
         }
         if (size == 0) throw new UserInputException(file, null, "the file is empty", "give a PDF file");
         if (size > limits.maxBytes()) {
-            throw new UserInputException(file, null, "the file is " + (size >> 20) + " MiB, more than the limit of "
-                    + (limits.maxBytes() >> 20) + " MiB", "extract the pages with the tables into a smaller PDF");
+            throw new UserInputException(file, null, "the file has " + size + " bytes (limit pdf-bytes is "
+                    + limits.maxBytes() + ")", "extract the pages with the tables into a smaller PDF, or raise the"
+                    + " limit with --limit pdf-bytes=N");
         }
         if (!new String(head, 0, headRead, StandardCharsets.ISO_8859_1).contains("%PDF-")) {
             throw new UserInputException(file, null, "this is not a PDF (no %PDF- header)", "give the paper's PDF file");

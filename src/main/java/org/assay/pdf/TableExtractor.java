@@ -13,7 +13,7 @@ public final class TableExtractor {
 
     public TableExtractor(PdfLimits limits) { this.reader = new PdfDocumentReader(limits); }
 
-    public TableExtractor() { this(PdfLimits.DEFAULT); }
+    public TableExtractor() { this(PdfLimits.current()); }
 
     /**
      * @param onlyTable the table number to keep ("3"), or null for every table

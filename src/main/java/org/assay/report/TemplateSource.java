@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.regex.Pattern;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 /**
@@ -16,8 +17,6 @@ import org.assay.common.UserInputException;
  * partial it includes) cannot read a file outside the folder.
  */
 public final class TemplateSource {
-    /** Template files are small; a larger one is a mistake or a hostile file. */
-    static final long MAX_BYTES = 1 << 20;
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_.-]{0,99}");
 
     /** Every template shipped in audit-templates/ (a test keeps this list equal to the folder). */
@@ -77,9 +76,10 @@ public final class TemplateSource {
 
     private static String read(Path p) {
         try {
-            if (Files.size(p) > MAX_BYTES) {
-                throw new UserInputException(p, null, "the template is larger than " + (MAX_BYTES >> 10) + " KiB",
-                        "templates are small text files; check that this is the right file");
+            // Template files are small; a larger one is a mistake or a hostile file.
+            long size = Files.size(p);
+            if (Limit.TEMPLATE_BYTES.exceededBy(size)) {
+                throw Limit.TEMPLATE_BYTES.exceeded(p, null, "the template has " + size + " bytes");
             }
             return Files.readString(p, StandardCharsets.UTF_8);
         } catch (java.nio.charset.MalformedInputException e) {

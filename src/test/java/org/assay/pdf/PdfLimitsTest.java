@@ -21,7 +21,7 @@ class PdfLimitsTest {
                 PdfLimits.DEFAULT.maxOperatorsPage(), PdfLimits.DEFAULT.millisPerPage());
         assertThatThrownBy(() -> new PdfDocumentReader(limits).read(LONG, null, null))
                 .isInstanceOf(UserInputException.class)
-                .hasMessageContaining("long-20pages.pdf").hasMessageContaining("20 pages, more than the limit of 10");
+                .hasMessageContaining("long-20pages.pdf").hasMessageContaining("20 pages (limit pdf-pages is 10)").hasMessageContaining("--limit pdf-pages=N");
     }
 
     @Test
@@ -38,7 +38,7 @@ class PdfLimitsTest {
     void aFileOverTheSizeLimitIsRefusedUnread() {
         PdfLimits limits = new PdfLimits(1024, 512, 100, 1000, 1000);
         assertThatThrownBy(() -> new PdfDocumentReader(limits).read(LONG, null, null))
-                .isInstanceOf(UserInputException.class).hasMessageContaining("more than the limit of 0 MiB");
+                .isInstanceOf(UserInputException.class).hasMessageContaining("(limit pdf-bytes is 1024)").hasMessageContaining("--limit pdf-bytes=N");
     }
 
     @Test

@@ -88,9 +88,10 @@ class TemplateRendererTest {
 
     @Test
     void anOversizedTemplateIsRefused() throws Exception {
-        Files.write(dir.resolve("big.mustache"), new byte[(int) TemplateSource.MAX_BYTES + 1]);
+        Files.write(dir.resolve("big.mustache"), new byte[(int) org.assay.common.Limit.TEMPLATE_BYTES.defaultValue() + 1]);
         assertThatThrownBy(() -> TemplateSource.folder(dir).load("big.mustache"))
-                .isInstanceOf(UserInputException.class).hasMessageContaining("larger than");
+                .isInstanceOf(UserInputException.class).hasMessageContaining("limit template-bytes")
+                .hasMessageContaining("--limit template-bytes=N");
     }
 
     @Test

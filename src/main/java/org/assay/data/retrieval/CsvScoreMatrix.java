@@ -13,6 +13,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.assay.common.UserInputException;
+import org.assay.data.TextFiles;
 
 /**
  * A score matrix as comma-separated text: one line per query, one score per candidate, and an
@@ -99,7 +100,7 @@ public final class CsvScoreMatrix implements ScoreMatrix {
 
     private static void read(Path file, LineVisitor visitor) {
         CsvSchema schema = CsvSchema.emptySchema().withColumnSeparator(',');
-        try (Reader reader = Files.newBufferedReader(file)) {
+        try (Reader reader = new java.io.BufferedReader(TextFiles.openUtf8(file, "score matrix"))) {
             MappingIterator<String[]> it = new CsvMapper().readerFor(String[].class).with(schema)
                     .with(CsvParser.Feature.WRAP_AS_ARRAY).with(CsvParser.Feature.SKIP_EMPTY_LINES)
                     .readValues(reader);

@@ -10,6 +10,7 @@ import java.nio.ByteOrder;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import org.assay.common.Limit;
 import org.assay.common.UserInputException;
 
 /**
@@ -74,7 +75,18 @@ public final class NpyScoreMatrix implements ScoreMatrix {
                     + header.rows() + " x " + header.columns() + " matrix its header declares",
                     "give a file written by numpy.save holding one array");
         }
+        checkLimits(file, header, size);
         return new NpyScoreMatrix(file, header);
+    }
+
+    private static void checkLimits(Path file, NpyHeader header, long size) {
+        if (Limit.FILE_BYTES.exceededBy(size)) throw Limit.FILE_BYTES.exceeded(file, null, "the file has " + size + " bytes");
+        if (Limit.ROWS.exceededBy(header.rows())) {
+            throw Limit.ROWS.exceeded(file, "header", "the matrix has " + header.rows() + " rows");
+        }
+        if (Limit.COLUMNS.exceededBy(header.columns())) {
+            throw Limit.COLUMNS.exceeded(file, "header", "the matrix has " + header.columns() + " columns");
+        }
     }
 
     @Override public Path file() { return file; }

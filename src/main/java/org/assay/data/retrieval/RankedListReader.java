@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.assay.common.UserInputException;
+import org.assay.data.TextFiles;
 
 /**
  * Ranked lists as JSON Lines, one query per line: {@code {"query": "q1", "ranked": ["c3", "c9"]}},
@@ -70,7 +71,7 @@ public final class RankedListReader {
     private static void readLists(Path file, List<String> queries, List<String[]> ranked) {
         ObjectMapper json = new ObjectMapper();
         Set<String> seen = new HashSet<>();
-        try (BufferedReader in = Files.newBufferedReader(file)) {
+        try (BufferedReader in = new BufferedReader(TextFiles.openUtf8(file, "ranked lists file"))) {
             String text;
             int line = 0;
             while ((text = in.readLine()) != null) {

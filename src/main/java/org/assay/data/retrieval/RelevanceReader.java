@@ -15,6 +15,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import org.assay.common.UserInputException;
+import org.assay.data.TextFiles;
 
 /**
  * Reads relevance judgements for a list of query ids and candidate ids.
@@ -109,7 +110,7 @@ public final class RelevanceReader {
     private static Relevance csv(Ids ids) {
         Path file = ids.file;
         List<String> queryIds = ids.queryIds;
-        try (BufferedReader in = Files.newBufferedReader(file)) {
+        try (BufferedReader in = new BufferedReader(TextFiles.openUtf8(file, "relevance file"))) {
             String text;
             int line = 0;
             while ((text = in.readLine()) != null) {
