@@ -21,9 +21,14 @@ public record ClassificationReproduction(String tableId, String row, Path predic
         ClassificationData data = ClassificationReader.read(predictions, options, progress);
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();
-        inputs.add(InputFile.of("predictions" + where, predictions));
-        if (options.manifest() != null) inputs.add(InputFile.of("manifest" + where, options.manifest()));
-        if (options.truth() != null) inputs.add(InputFile.of("truth" + where, options.truth()));
+        RowCount evaluated = RowCount.allUsed(data.size());
+        inputs.add(InputFile.of("predictions" + where, predictions).withRows(evaluated));
+        // a manifest must list exactly the evaluated ids (the reader checks), so all of them are used
+        if (options.manifest() != null) inputs.add(InputFile.of("manifest" + where, options.manifest()).withRows(evaluated));
+        if (options.truth() != null) {
+            inputs.add(InputFile.of("truth" + where, options.truth()).withRows(new RowCount(data.truthRows(), data.size(),
+                    "ids the predictions do not list (not evaluated)")));
+        }
         return new Outputs(List.of(new Part(null, null, data, options.manifest() != null, "predictions")), inputs);
     }
 }

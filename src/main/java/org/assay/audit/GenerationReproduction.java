@@ -28,13 +28,15 @@ public record GenerationReproduction(String tableId, String row, Path outputs, L
         GenerationData data = GenerationReader.read(outputs, references);
         String where = tableId == null ? "" : " for " + tableId;
         List<InputFile> inputs = new ArrayList<>();
-        inputs.add(InputFile.of((references.isEmpty() ? "outputs" : "hypotheses") + where, outputs));
+        // every item is used: parallel files must have equal line counts and a manifest must list exactly the items
+        RowCount items = RowCount.allUsed(data.size());
+        inputs.add(InputFile.of((references.isEmpty() ? "outputs" : "hypotheses") + where, outputs).withRows(items));
         for (int i = 0; i < references.size(); i++) {
-            inputs.add(InputFile.of("references " + (i + 1) + where, references.get(i)));
+            inputs.add(InputFile.of("references " + (i + 1) + where, references.get(i)).withRows(items));
         }
         if (manifest != null) {
             Manifest.checkCovers(manifest, outputs, data.ids());
-            inputs.add(InputFile.of("manifest" + where, manifest));
+            inputs.add(InputFile.of("manifest" + where, manifest).withRows(items));
         }
         String what = data.size() + " items" + (references.isEmpty() ? "" : ", " + references.size() + " reference files");
         return new Outputs(List.of(new Part(null, null, data, manifest != null, what)), inputs);

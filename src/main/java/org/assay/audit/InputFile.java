@@ -23,6 +23,7 @@ public final class InputFile {
     private final Path path;
     private long bytes = -1;
     private String sha256;
+    private RowCount rows;
 
     private InputFile(String role, Path path) {
         this.role = Objects.requireNonNull(role);
@@ -42,6 +43,15 @@ public final class InputFile {
     }
 
     public String role() { return role; }
+
+    /** Records what became of the file's rows; returns this file. */
+    public InputFile withRows(RowCount rows) {
+        this.rows = rows;
+        return this;
+    }
+
+    /** What became of the file's rows, or null where rows are not counted (a relevance file, a claims file). */
+    public RowCount rows() { return rows; }
 
     public Path path() { return path; }
 

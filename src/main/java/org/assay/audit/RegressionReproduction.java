@@ -16,6 +16,6 @@ public record RegressionReproduction(String tableId, String row, Path prediction
         RegressionData data = RegressionReader.read(predictions, columns, progress);
         String where = tableId == null ? "" : " for " + tableId;
         return new Outputs(List.of(new Part(null, null, data, false, "predictions")),
-                List.of(InputFile.of("predictions" + where, predictions)));
+                List.of(InputFile.of("predictions" + where, predictions).withRows(RowCount.allUsed(data.size()))));
     }
 }

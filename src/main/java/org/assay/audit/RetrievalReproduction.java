@@ -44,7 +44,13 @@ public record RetrievalReproduction(String tableId, String row, List<RetrievalIn
         for (RetrievalInput in : directions) {
             RetrievalDirection d = in.read();
             read.add(d);
-            for (Path p : in.files()) inputs.add(InputFile.of(in.label() + where, p));
+            // the first file holds the direction's queries (score-matrix rows or columns, ranked lists); all are used
+            boolean first = true;
+            for (Path p : in.files()) {
+                InputFile f = InputFile.of(in.label() + where, p);
+                inputs.add(first ? f.withRows(RowCount.allUsed(d.size())) : f);
+                first = false;
+            }
         }
         if (manifest != null) {
             int listed = Manifest.read(manifest).size();
@@ -54,7 +60,7 @@ public record RetrievalReproduction(String tableId, String row, List<RetrievalIn
                         + directions.get(0).label() + ") has " + queries + " queries",
                         "list first the direction whose queries the manifest names, or give its manifest");
             }
-            inputs.add(InputFile.of("manifest" + where, manifest));
+            inputs.add(InputFile.of("manifest" + where, manifest).withRows(RowCount.allUsed(listed)));
         }
         for (int i = 0; i < read.size(); i++) {
             RetrievalDirection d = read.get(i);

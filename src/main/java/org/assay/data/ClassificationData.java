@@ -17,6 +17,7 @@ import java.util.List;
  * @param probabilities per-class probabilities, n rows x K classes, or null
  * @param positive      code of the positive class, or -1 when none is named (multiclass)
  * @param warnings      non-fatal findings, each one line naming the file and row
+ * @param truthRows     rows of the separate truth file (the whole test set, say), or -1 when none was read
  */
 public record ClassificationData(
         Path source,
@@ -27,7 +28,14 @@ public record ClassificationData(
         double[] scores,
         ProbabilityTable probabilities,
         int positive,
-        List<String> warnings) implements EvaluationData {
+        List<String> warnings,
+        long truthRows) implements EvaluationData {
+
+    /** Data whose labels came with the predictions (no separate truth file). */
+    public ClassificationData(Path source, List<String> ids, List<String> classes, int[] truth, int[] predicted,
+                              double[] scores, ProbabilityTable probabilities, int positive, List<String> warnings) {
+        this(source, ids, classes, truth, predicted, scores, probabilities, positive, warnings, -1);
+    }
 
     public int size() { return truth.length; }
 

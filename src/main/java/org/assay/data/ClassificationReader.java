@@ -36,6 +36,7 @@ public final class ClassificationReader {
         LabelTable labels = new LabelTable();
         PredictionRows rows;
         BitSet truthClasses = new BitSet();
+        long truthRows = -1;
         if (options.truth() == null) {
             try (Progress.Task reading = reading(progress, "reading ", predictions)) {
                 rows = PredictionRows.read(predictions, options, false, labels, reading);
@@ -47,6 +48,7 @@ public final class ClassificationReader {
                     rows = PredictionRows.read(predictions, options, true, labels, reading);
                 }
                 truthClasses = truthFile.join(rows, labels);
+                truthRows = truthFile.rowsRead();
             }
         }
         if (options.manifest() != null) {
@@ -76,7 +78,8 @@ public final class ClassificationReader {
             Probabilities.sumWarning(predictions, rows, probabilities).ifPresent(warnings::add);
         }
         return new ClassificationData(predictions, rows.ids().ids(), coding.classes(), truth, predicted,
-                rows.scores() == null ? null : rows.scores().toArray(), probabilities, positive, List.copyOf(warnings));
+                rows.scores() == null ? null : rows.scores().toArray(), probabilities, positive, List.copyOf(warnings),
+                truthRows);
     }
 
     /** A step over {@code file} counted in bytes (0 when its size cannot be read: the reader reports that). */

@@ -21,6 +21,7 @@ final class TruthFile implements AutoCloseable {
     private final Path file;
     private final ReadOptions options;
     private final RowSource rows;
+    private long rowsRead;
     private final int id;
     private final int label;
 
@@ -90,6 +91,7 @@ final class TruthFile implements AutoCloseable {
                     "check which file is right; drop the label column or the truth file if one is stale");
         }
         requireEveryPrediction(predictions, joined);
+        rowsRead = joined.size();
         return classes;
     }
 
@@ -107,6 +109,9 @@ final class TruthFile implements AutoCloseable {
                         + joined.unmatched().similarHint(firstId),
                 "give a truth file that covers every example, or check that both files use the same ids");
     }
+
+    /** Rows of the truth file, once {@link #join} has read them all. */
+    long rowsRead() { return rowsRead; }
 
     @Override
     public void close() {

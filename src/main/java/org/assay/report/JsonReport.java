@@ -52,6 +52,13 @@ public final class JsonReport {
             o.put("path", f.path().toString());
             o.put("bytes", f.bytes());
             o.put("sha256", f.sha256());
+            if (f.rows() != null) {
+                ObjectNode rows = o.putObject("rows");
+                rows.put("read", f.rows().read());
+                rows.put("used", f.rows().used());
+                rows.put("set_aside", f.rows().setAside());
+                if (f.rows().setAsideReason() != null) rows.put("set_aside_reason", f.rows().setAsideReason());
+            }
         }
         ObjectNode counts = root.putObject("counts");
         for (Verdict v : Verdict.values()) counts.put(v.word(), r.count(v));

@@ -410,9 +410,16 @@ public final class ReportModel {
         List<Map<String, Object>> files = new ArrayList<>();
         for (InputFile f : inputs) {
             files.add(Map.of("role", f.role(), "path", f.path().toString(), "bytes", String.valueOf(f.bytes()),
-                    "sha256", f.sha256()));
+                    "sha256", f.sha256(), "rows", rowsText(f.rows())));
         }
         m.put("inputs", files);
         return m;
+    }
+
+    /** "4000 read, 400 used, 3600 set aside: ids the predictions do not list (not evaluated)"; "" when not counted. */
+    static String rowsText(org.assay.audit.RowCount rows) {
+        if (rows == null) return "";
+        String text = rows.read() + " read, " + rows.used() + " used";
+        return rows.setAside() == 0 ? text : text + ", " + rows.setAside() + " set aside: " + rows.setAsideReason();
     }
 }
