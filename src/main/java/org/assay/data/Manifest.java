@@ -97,7 +97,7 @@ public final class Manifest {
             String id = predictions.id(first);
             throw new UserInputException(predictions.file(), RowErrors.line(predictions.line(first)),
                     "id '" + id + "' is not in the manifest " + manifest + more(missing)
-                            + listed.unmatched().similarHint(id),
+                            + listed.similarHint(id),
                     "give the manifest the subsample was drawn with, or remove predictions for ids outside it");
         }
         IdRegistry unlisted = listed.unmatched();

@@ -113,11 +113,21 @@ class ClassificationReaderBadInputTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {"Abc|abc", "' abc'|abc", "'ABC '|abc"})
-    void idsDifferingOnlyByCaseOrSurroundingSpace(String second, String first) throws Exception {
+    @CsvSource(delimiter = '|', value = {"' abc'|abc|surrounding whitespace", "'ABC '|abc|case and surrounding whitespace"})
+    void idsDifferingBySurroundingSpace(String second, String first, String how) throws Exception {
         Path file = write(dir, "near.csv", "id,label,prediction\n" + first + ",1,1\n\"" + second + "\",1,1\n");
         assertFails(file, "line 3", "id '" + second + "' differs from id 'abc' on line 2",
-                "only by case or surrounding whitespace", "formatting mismatch");
+                "only by " + how + ",", "formatting mismatch");
+    }
+
+    @Test
+    void idsDifferingOnlyByCaseAreDifferentExamplesWithAWarning() throws Exception {
+        Path file = write(dir, "cased.csv", "id,label,prediction\nabc,1,1\nAbc,0,1\naBC,1,0\nx,0,0\n");
+        ClassificationData data = ClassificationReader.read(file, ReadOptions.defaults());
+        assertThat(data.ids()).containsExactly("abc", "Abc", "aBC", "x");
+        assertThat(data.warnings()).singleElement().asString().startsWith("WARNING " + file)
+                .contains("id 'Abc' on line 3 differs from id 'abc' on line 2 only by case")
+                .contains("2 ids differ from an earlier one only by case");
     }
 
     @Test
