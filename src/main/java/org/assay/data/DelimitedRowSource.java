@@ -20,6 +20,9 @@ import java.util.Map;
  * quote; the same quoting is accepted in tab-separated files. Blank lines are skipped (they hold
  * no row).
  *
+ * <p>A header of one field that holds another common separator (a semicolon, say) is an error
+ * naming that separator: otherwise it surfaces as a missing column with a misleading fix.
+ *
  * <p>The header is read as the first record rather than through {@code CsvSchema.withHeader()}:
  * the header schema maps each row to named fields and so cannot report a row with too few fields
  * or a header that repeats a name, and both must be errors here.
@@ -57,6 +60,20 @@ final class DelimitedRowSource implements RowSource {
     }
 
     private void checkHeader() {
+        if (columns.size() == 1) {
+            Character other = otherSeparator(columns.get(0));
+            if (other != null) {
+                throw new UserInputException(file, RowErrors.line(headerLine),
+                        "the header is one column '" + columns.get(0) + "': the file looks separated by "
+                                + separatorName(other) + ", not by " + separatorName(separator),
+                        separator == ',' && other == '\t'
+                                ? "name a tab-separated file .tsv, or save it comma-separated"
+                                : separator == '\t' && other == ','
+                                ? "name a comma-separated file .csv, or save it tab-separated"
+                                : "save it " + (separator == ',' ? "comma" : "tab") + "-separated"
+                                        + " (spreadsheet programs in some locales use ';' unless told otherwise)");
+            }
+        }
         Map<String, Integer> seen = new HashMap<>();
         for (int i = 0; i < columns.size(); i++) {
             Integer before = seen.putIfAbsent(columns.get(i), i);
@@ -66,6 +83,28 @@ final class DelimitedRowSource implements RowSource {
                                 + (before + 1) + " and " + (i + 1) + ")",
                         "give every column a distinct name");
             }
+        }
+    }
+
+    /**
+     * The separator a one-column header seems to use instead of ours, or null. Column names do not
+     * hold separators, so a lone header field holding another common one is almost certainly a
+     * file written with that separator (a semicolon is the spreadsheet default where the decimal
+     * mark is a comma).
+     */
+    private Character otherSeparator(String header) {
+        for (char c : new char[] {';', '\t', ',', '|'}) {
+            if (c != separator && header.indexOf(c) >= 0) return c;
+        }
+        return null;
+    }
+
+    private static String separatorName(char c) {
+        switch (c) {
+            case ',': return "commas";
+            case '\t': return "tabs";
+            case ';': return "semicolons";
+            default: return "'" + c + "'";
         }
     }
 

@@ -101,6 +101,17 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
+    void aHeaderOfOneFieldHoldingAnotherSeparatorNamesTheSeparator() throws Exception {
+        assertFails(write(dir, "semi.csv", "id;label;prediction\nx;1;1\n"), "line 1",
+                "the header is one column 'id;label;prediction'", "separated by semicolons, not by commas",
+                "save it comma-separated");
+        assertFails(write(dir, "tabs.csv", "id\tlabel\tprediction\nx\t1\t1\n"), "line 1",
+                "separated by tabs, not by commas", "name a tab-separated file .tsv");
+        assertFails(write(dir, "commas.tsv", "id,label,prediction\nx,1,1\n"), "line 1",
+                "separated by commas, not by tabs", "name a comma-separated file .csv");
+    }
+
+    @Test
     void unterminatedQuote() throws Exception {
         assertFails(write(dir, "quote.csv", "id,label,prediction\nx,1,1\n\"y,1,1\n"), "line 3",
                 "cannot parse the row", "Missing closing quote", "closing double quote");
