@@ -279,9 +279,16 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
-    void jsonScoreWrittenAsAString() throws Exception {
-        assertFails(write(dir, "text.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": \"0.5\"}\n"),
-                "line 1", "field 'score' must be a JSON number", "without quotes");
+    void jsonScoreWrittenAsAStringIsReadAsTheNumberButStillStrictly() throws Exception {
+        Path quoted = write(dir, "text.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": \"0.5\"}\n"
+                + "{\"id\": \"y\", \"label\": 0, \"score\": 0.25}\n");
+        ClassificationData data = ClassificationReader.read(quoted, ReadOptions.defaults());
+        assertThat(data.scores()).containsExactly(0.5, 0.25);
+        assertFails(write(dir, "nan.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": 0.5}\n"
+                        + "{\"id\": \"y\", \"label\": 0, \"score\": \"NaN\"}\n"),
+                "line 2", "'score' value 'NaN' is NaN or infinite");
+        assertFails(write(dir, "comma.jsonl", "{\"id\": \"x\", \"label\": 1, \"p_1\": \"0,5\", \"p_0\": 0.5}\n"),
+                "line 1", "'p_1' value '0,5' is not a number");
     }
 
     @Test
