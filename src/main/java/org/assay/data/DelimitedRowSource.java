@@ -18,7 +18,9 @@ import java.util.Map;
  * Comma- or tab-separated rows read with jackson-dataformat-csv. Quoting follows RFC 4180
  * (common practice): a field in double quotes may hold the separator, a newline, or a doubled
  * quote; the same quoting is accepted in tab-separated files. Blank lines are skipped (they hold
- * no row).
+ * no row) here rather than by Jackson's {@code SKIP_EMPTY_LINES}, which also strips the leading
+ * spaces of every record's first field (jackson-dataformat-csv 2.23), so an id written " d" would
+ * silently become "d"; fields are kept exactly as written.
  *
  * <p>A header of one field that holds another common separator (a semicolon, say) is an error
  * naming that separator: otherwise it surfaces as a missing column with a misleading fix.
@@ -47,7 +49,6 @@ final class DelimitedRowSource implements RowSource {
             this.rows = new CsvMapper().readerFor(String[].class)
                     .with(schema)
                     .with(CsvParser.Feature.WRAP_AS_ARRAY)
-                    .with(CsvParser.Feature.SKIP_EMPTY_LINES)
                     .readValues(reader);
         } catch (IOException e) {
             throw RowErrors.unreadable(file, e);
@@ -129,11 +130,13 @@ final class DelimitedRowSource implements RowSource {
     private boolean advance() {
         int start = line + 1;
         try {
-            if (!rows.hasNextValue()) return false;
-            // After hasNextValue the parser stands at the start of the record: its line is the
-            // record's first line even when a quoted field spans several lines.
-            start = parser.currentLocation().getLineNr();
-            current = rows.nextValue();
+            do {
+                if (!rows.hasNextValue()) return false;
+                // After hasNextValue the parser stands at the start of the record: its line is the
+                // record's first line even when a quoted field spans several lines.
+                start = parser.currentLocation().getLineNr();
+                current = rows.nextValue();
+            } while (isBlankLine(current));
             line = start;
             return true;
         } catch (JsonProcessingException e) {
@@ -141,6 +144,11 @@ final class DelimitedRowSource implements RowSource {
         } catch (IOException e) {
             throw RowErrors.unreadable(file, e);
         }
+    }
+
+    /** A record of one empty or all-blank field: a blank line, which holds no row. */
+    private static boolean isBlankLine(String[] record) {
+        return record.length == 0 || record.length == 1 && record[0].isBlank();
     }
 
     /** A malformed record, reported at the line it starts on (Jackson notices at its end). */

@@ -112,6 +112,16 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
+    void leadingSpacesOfTheFirstFieldAreKeptAndBlankLinesStillSkipped() throws Exception {
+        // Jackson's SKIP_EMPTY_LINES would turn " d" into "d" (then a plain duplicate, or a silent match)
+        assertFails(write(dir, "lead.csv", "id,label,prediction\nd,1,1\n\n   \n d,0,0\n"), "line 5",
+                "id ' d' differs from id 'd' on line 2 only by surrounding whitespace");
+        ClassificationData data = ClassificationReader.read(
+                write(dir, "blank.csv", "id,label,prediction\n\n d,1,1\n \t \ne,0,0\n\n"), ReadOptions.defaults());
+        assertThat(data.ids()).containsExactly(" d", "e");
+    }
+
+    @Test
     void unterminatedQuote() throws Exception {
         assertFails(write(dir, "quote.csv", "id,label,prediction\nx,1,1\n\"y,1,1\n"), "line 3",
                 "cannot parse the row", "Missing closing quote", "closing double quote");
