@@ -116,10 +116,12 @@ public final class Manifest {
     private static void eachId(Path file, List<String> comments, IdSink sink, Progress.Task progress) {
         boolean anyLine = false;
         int ids = 0;
+        int lines = 0;
         try (BufferedReader reader = new BufferedReader(StrictUtf8Reader.open(file, "manifest", progress))) {
             int line = 0;
             for (String text = reader.readLine(); text != null; text = reader.readLine()) {
                 line++;
+                lines = line;
                 anyLine = true;
                 if (text.isBlank()) continue;
                 if (text.startsWith("#")) {
@@ -134,7 +136,8 @@ public final class Manifest {
         }
         if (!anyLine) throw RowErrors.empty(file, "manifest");
         if (ids == 0) {
-            throw new UserInputException(file, null, "the manifest lists no ids",
+            throw new UserInputException(file, lines == 1 ? "line 1" : "lines 1-" + lines,
+                    "the manifest lists no ids, only comments (#) and blank lines",
                     "write one sampled id per line");
         }
     }
