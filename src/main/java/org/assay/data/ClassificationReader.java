@@ -17,8 +17,9 @@ import java.util.List;
  * <p>Classes are the true labels (all labels of the truth file when one is given) and the classes
  * of the probability columns; a predicted label must be one of them. When the file has no
  * predicted label but has probabilities, the prediction is their arg-max, ties going to the lowest
- * class code. Every problem is a {@link UserInputException} naming the file and line; the only
- * non-fatal finding, probabilities that do not sum to one, is a warning in the result.
+ * class code. Every problem is a {@link UserInputException} naming the file and line; the
+ * non-fatal findings, probabilities that do not sum to one and prediction ids that differ only by
+ * case, are warnings in the result.
  *
  * <p>Memory stays bounded by the per-row columns: the predictions are read once into compact
  * columns, the truth file and the manifest are streamed against their ids afterwards, and the
@@ -56,6 +57,7 @@ public final class ClassificationReader {
                 Manifest.checkCovers(options.manifest(), rows.ids(), checking);
             }
         }
+        java.util.Optional<String> caseWarning = rows.ids().caseWarning();
         rows.ids().releaseLookup();
 
         ClassCoding coding = ClassCoding.of(labels, classFlags(labels, rows, truthClasses));
@@ -74,6 +76,7 @@ public final class ClassificationReader {
                     "set --positive to the class the score is for");
         }
         List<String> warnings = new ArrayList<>();
+        caseWarning.ifPresent(warnings::add);
         if (probabilities != null) {
             Probabilities.sumWarning(predictions, rows, probabilities).ifPresent(warnings::add);
         }

@@ -21,7 +21,12 @@ import java.util.Map;
  * Comma- or tab-separated rows read with jackson-dataformat-csv. Quoting follows RFC 4180
  * (common practice): a field in double quotes may hold the separator, a newline, or a doubled
  * quote; the same quoting is accepted in tab-separated files. Blank lines are skipped (they hold
- * no row).
+ * no row) here rather than by Jackson's {@code SKIP_EMPTY_LINES}, which also strips the leading
+ * spaces of every record's first field (jackson-dataformat-csv 2.23), so an id written " d" would
+ * silently become "d"; fields are kept exactly as written.
+ *
+ * <p>A header of one field that holds another common separator (a semicolon, say) is an error
+ * naming that separator: otherwise it surfaces as a missing column with a misleading fix.
  *
  * <p>The header is read as the first record rather than through {@code CsvSchema.withHeader()}:
  * the header schema maps each row to named fields and so cannot report a row with too few fields
@@ -52,7 +57,6 @@ final class DelimitedRowSource implements RowSource {
             this.rows = new CsvMapper(factory).readerFor(String[].class)
                     .with(schema)
                     .with(CsvParser.Feature.WRAP_AS_ARRAY)
-                    .with(CsvParser.Feature.SKIP_EMPTY_LINES)
                     .readValues(reader);
         } catch (IOException e) {
             throw RowErrors.unreadable(file, e);
@@ -68,6 +72,20 @@ final class DelimitedRowSource implements RowSource {
         if (Limit.COLUMNS.exceededBy(columns.size())) {
             throw Limit.COLUMNS.exceeded(file, RowErrors.line(headerLine), "the header has " + columns.size() + " columns");
         }
+        if (columns.size() == 1) {
+            Character other = otherSeparator(columns.get(0));
+            if (other != null) {
+                throw new UserInputException(file, RowErrors.line(headerLine),
+                        "the header is one column '" + columns.get(0) + "': the file looks separated by "
+                                + separatorName(other) + ", not by " + separatorName(separator),
+                        separator == ',' && other == '\t'
+                                ? "name a tab-separated file .tsv, or save it comma-separated"
+                                : separator == '\t' && other == ','
+                                ? "name a comma-separated file .csv, or save it tab-separated"
+                                : "save it " + (separator == ',' ? "comma" : "tab") + "-separated"
+                                        + " (spreadsheet programs in some locales use ';' unless told otherwise)");
+            }
+        }
         Map<String, Integer> seen = new HashMap<>();
         for (int i = 0; i < columns.size(); i++) {
             Integer before = seen.putIfAbsent(columns.get(i), i);
@@ -77,6 +95,28 @@ final class DelimitedRowSource implements RowSource {
                                 + (before + 1) + " and " + (i + 1) + ")",
                         "give every column a distinct name");
             }
+        }
+    }
+
+    /**
+     * The separator a one-column header seems to use instead of ours, or null. Column names do not
+     * hold separators, so a lone header field holding another common one is almost certainly a
+     * file written with that separator (a semicolon is the spreadsheet default where the decimal
+     * mark is a comma).
+     */
+    private Character otherSeparator(String header) {
+        for (char c : new char[] {';', '\t', ',', '|'}) {
+            if (c != separator && header.indexOf(c) >= 0) return c;
+        }
+        return null;
+    }
+
+    private static String separatorName(char c) {
+        switch (c) {
+            case ',': return "commas";
+            case '\t': return "tabs";
+            case ';': return "semicolons";
+            default: return "'" + c + "'";
         }
     }
 
@@ -104,11 +144,13 @@ final class DelimitedRowSource implements RowSource {
     private boolean advance() {
         int start = line + 1;
         try {
-            if (!rows.hasNextValue()) return false;
-            // After hasNextValue the parser stands at the start of the record: its line is the
-            // record's first line even when a quoted field spans several lines.
-            start = parser.currentLocation().getLineNr();
-            current = rows.nextValue();
+            do {
+                if (!rows.hasNextValue()) return false;
+                // After hasNextValue the parser stands at the start of the record: its line is the
+                // record's first line even when a quoted field spans several lines.
+                start = parser.currentLocation().getLineNr();
+                current = rows.nextValue();
+            } while (isBlankLine(current));
             line = start;
             return true;
         } catch (JsonProcessingException e) {
@@ -116,6 +158,11 @@ final class DelimitedRowSource implements RowSource {
         } catch (IOException e) {
             throw RowErrors.unreadable(file, e);
         }
+    }
+
+    /** A record of one empty or all-blank field: a blank line, which holds no row. */
+    private static boolean isBlankLine(String[] record) {
+        return record.length == 0 || record.length == 1 && record[0].isBlank();
     }
 
     /** A malformed record, reported at the line it starts on (Jackson notices at its end). */

@@ -28,7 +28,7 @@ enum Format {
 
     /**
      * Opens {@code file} as rows; {@code what} names the file's role in messages. The options say
-     * which JSON fields must be numbers and how a nested probabilities object is named.
+     * how a nested probabilities object's fields are named.
      */
     RowSource open(Path file, String what, ReadOptions options) {
         return open(file, what, options, Progress.Task.NONE);

@@ -5,13 +5,15 @@ import java.nio.file.Path;
 /**
  * The ids of a second file (a manifest, a truth file) read after the predictions and matched
  * against their complete {@link IdRegistry}, with exactly the checks an {@code IdRegistry} of
- * that file would make (empty, repeated, differing only by case or whitespace, naming the same
+ * that file would make (empty, repeated, differing by surrounding whitespace, naming the same
  * earlier id and line), but without storing a second copy of the ids both files share: a shared
  * id costs one int (its line here), and only the ids the predictions lack are registered.
  *
- * <p>The check is equivalent because the predictions hold at most one id per normalized form, so
- * an id of this file can clash with an earlier one only through the same prediction id (matched
- * before) or through an id the predictions lack (registered in {@link #unmatched()}).
+ * <p>The check is equivalent because an earlier id of this file is either a prediction id (its
+ * line here recorded) or one the predictions lack (registered in {@link #unmatched()}); both are
+ * searched for ids of the same normalized form, and the worst relation found decides, as in the
+ * registry. Ids of this file that differ only by case are accepted without a warning of their
+ * own: the predictions' registry warns about the ids that are evaluated.
  */
 final class JoinedIds {
     private final Path file;
@@ -33,22 +35,59 @@ final class JoinedIds {
      */
     int add(String id, int line) {
         if (id.isBlank()) return unmatched.add(id, line);   // throws the usual error
-        int at = predictions.indexOf(id);
+        IdRegistry.Kinship worst = null;
+        String earlier = null;
+        int earlierLine = 0;
+        int at = -1;
+        for (int pass = 0; pass < 2; pass++) {
+            IdRegistry ids = pass == 0 ? predictions : unmatched;
+            int n = ids.similar(id);
+            for (int i = 0; i < n; i++) {
+                int index = ids.similarAt(i);
+                if (pass == 0 && predictions.id(index).equals(id)) at = index;
+                int lineOfIt = pass == 0 ? lineHere[index] : ids.line(index);
+                if (lineOfIt == 0) continue;   // a prediction id this file has not listed (yet)
+                IdRegistry.Kinship kin = IdRegistry.Kinship.of(id, ids.id(index));
+                if (worst == null || kin.compareTo(worst) < 0 || kin == worst && lineOfIt < earlierLine) {
+                    worst = kin;
+                    earlier = ids.id(index);
+                    earlierLine = lineOfIt;
+                }
+            }
+        }
+        if (worst != null && !worst.allowed()) {
+            throw IdRegistry.conflict(file, id, line, earlier, earlierLine, worst);
+        }
         if (at >= 0) {
-            if (lineHere[at] > 0) throw IdRegistry.duplicate(file, id, line, lineHere[at]);
-            int near = unmatched.indexOfSimilar(id);
-            if (near >= 0) throw IdRegistry.similar(file, id, line, unmatched.id(near), unmatched.line(near));
             lineHere[at] = line;
-            size++;
-            return at;
+        } else {
+            unmatched.add(id, line);
         }
-        int near = predictions.indexOfSimilar(id);
-        if (near >= 0 && lineHere[near] > 0) {
-            throw IdRegistry.similar(file, id, line, predictions.id(near), lineHere[near]);
-        }
-        unmatched.add(id, line);
         size++;
-        return -1;
+        return at;
+    }
+
+    /**
+     * A hint for a prediction id this file lacks: the first id of this file (matched or not) that
+     * equals it up to case and whitespace, as {@link IdRegistry#similarHint} on a registry of the
+     * whole file would give.
+     */
+    String similarHint(String id) {
+        String near = null;
+        int nearLine = 0;
+        for (int pass = 0; pass < 2; pass++) {
+            IdRegistry ids = pass == 0 ? predictions : unmatched;
+            int n = ids.similar(id);
+            for (int i = 0; i < n; i++) {
+                int index = ids.similarAt(i);
+                int lineOfIt = pass == 0 ? lineHere[index] : ids.line(index);
+                if (lineOfIt > 0 && (near == null || lineOfIt < nearLine)) {
+                    near = ids.id(index);
+                    nearLine = lineOfIt;
+                }
+            }
+        }
+        return near == null ? "" : IdRegistry.hint(near, nearLine);
     }
 
     /** Line in this file of prediction {@code index}'s id, or 0 when this file does not list it. */

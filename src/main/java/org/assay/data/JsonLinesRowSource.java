@@ -28,7 +28,10 @@ import java.util.Map;
  * fields {@code <prefix><class>}, so it reads like the {@code p_<class>} columns of a CSV file.
  * The first object fixes the set of fields; every later line must have the same ones (the
  * analogue of a ragged row). Numbers keep the text they were written with ({@code 1.0} stays
- * {@code "1.0"}), so labels compare as written. Blank lines are skipped.
+ * {@code "1.0"}), so labels compare as written. A score or probability written as a JSON string
+ * ({@code "0.9"}) is accepted like the number: many exporters quote numbers, the text is the same
+ * either way, and it is then parsed as strictly as a CSV field ({@link NumberField}: "NaN", "0,9"
+ * or "high" are still errors naming the line), as the regression reader does. Blank lines are skipped.
  */
 final class JsonLinesRowSource implements RowSource {
     static final String PROBABILITIES = "probabilities";
@@ -146,7 +149,7 @@ final class JsonLinesRowSource implements RowSource {
                                         + "' and in '" + path + "'",
                                 "give each class's probability once");
                     }
-                    fields.put(name, scalar(path, entry.getValue(), true));
+                    fields.put(name, scalar(path, entry.getValue()));
                 }
             } else {
                 String name = field.getKey();
@@ -155,29 +158,20 @@ final class JsonLinesRowSource implements RowSource {
                             "field '" + name + "' is given twice (also inside '" + PROBABILITIES + "')",
                             "give each class's probability once");
                 }
-                fields.put(name, scalar(name, field.getValue(), isNumeric(name)));
+                fields.put(name, scalar(name, field.getValue()));
             }
         }
         return fields;
     }
 
-    private boolean isNumeric(String name) {
-        return name.equals(options.scoreColumn()) || name.startsWith(options.probabilityPrefix());
-    }
-
     /** The text of a scalar field; "" for null. */
-    private String scalar(String name, JsonNode value, boolean numeric) {
+    private String scalar(String name, JsonNode value) {
         if (value.isNull()) return "";
         if (value.isContainerNode()) {
             throw new UserInputException(file, RowErrors.line(lineNumber),
                     "field '" + name + "' holds " + (value.isArray() ? "an array" : "an object")
                             + " where a single value belongs",
                     "write a string or a number there");
-        }
-        if (numeric && !value.isNumber()) {
-            throw new UserInputException(file, RowErrors.line(lineNumber),
-                    "field '" + name + "' must be a JSON number, found " + value,
-                    "write the value as a number without quotes, such as 0.25");
         }
         // Big decimals with trailing zeros kept keep the written scale: BigDecimal("1.0").toString() is "1.0".
         return value.isBigDecimal() ? value.decimalValue().toString() : value.asText();

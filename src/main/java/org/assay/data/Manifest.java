@@ -97,7 +97,7 @@ public final class Manifest {
             String id = predictions.id(first);
             throw new UserInputException(predictions.file(), RowErrors.line(predictions.line(first)),
                     "id '" + id + "' is not in the manifest " + manifest + more(missing)
-                            + listed.unmatched().similarHint(id),
+                            + listed.similarHint(id),
                     "give the manifest the subsample was drawn with, or remove predictions for ids outside it");
         }
         IdRegistry unlisted = listed.unmatched();
@@ -116,10 +116,12 @@ public final class Manifest {
     private static void eachId(Path file, List<String> comments, IdSink sink, Progress.Task progress) {
         boolean anyLine = false;
         int ids = 0;
+        int lines = 0;
         try (BufferedReader reader = new BufferedReader(StrictUtf8Reader.open(file, "manifest", progress))) {
             int line = 0;
             for (String text = reader.readLine(); text != null; text = reader.readLine()) {
                 line++;
+                lines = line;
                 anyLine = true;
                 if (text.isBlank()) continue;
                 if (text.startsWith("#")) {
@@ -134,7 +136,8 @@ public final class Manifest {
         }
         if (!anyLine) throw RowErrors.empty(file, "manifest");
         if (ids == 0) {
-            throw new UserInputException(file, null, "the manifest lists no ids",
+            throw new UserInputException(file, lines == 1 ? "line 1" : "lines 1-" + lines,
+                    "the manifest lists no ids, only comments (#) and blank lines",
                     "write one sampled id per line");
         }
     }

@@ -12,7 +12,7 @@ import java.util.List;
  * so a number written as a JSON string (such as {@code "2.5"}) is accepted like {@code 2.5}.
  */
 public final class TableRows implements AutoCloseable {
-    /** A probability prefix no field name starts with: no field is flattened or forced numeric. */
+    /** A probability prefix no field name starts with: no field is flattened. */
     private static final ReadOptions PLAIN_JSON =
             new ReadOptions("id", "label", "prediction", null, "\u0000", null, null, null);
 
@@ -65,13 +65,17 @@ public final class TableRows implements AutoCloseable {
 
     /**
      * The id in {@code column} of the current row; fails on an empty id, an id seen before, or
-     * one that differs from an earlier id only by case or surrounding whitespace.
+     * one that differs from an earlier id by surrounding whitespace (ids that differ only by case
+     * are accepted, see {@link #caseWarning()}).
      */
     public String uniqueId(int column) {
         String id = rows.value(column);
         ids.add(id, rows.line());
         return id;
     }
+
+    /** The warning for ids accepted by {@link #uniqueId} that differ only by case, if any. */
+    public java.util.Optional<String> caseWarning() { return ids.caseWarning(); }
 
     /** The ids accepted by {@link #uniqueId} so far, in order (a compact list, decoded on access). */
     public List<String> ids() { return ids.ids(); }

@@ -106,7 +106,7 @@ final class TruthFile implements AutoCloseable {
         throw new UserInputException(predictions.ids().file(), RowErrors.line(predictions.line(first)),
                 "id '" + firstId + "' is not in the truth file " + options.truth()
                         + (missing > 1 ? " (and " + (missing - 1) + " more ids)" : "")
-                        + joined.unmatched().similarHint(firstId),
+                        + joined.similarHint(firstId),
                 "give a truth file that covers every example, or check that both files use the same ids");
     }
 

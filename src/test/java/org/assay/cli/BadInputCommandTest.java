@@ -65,14 +65,11 @@ class BadInputCommandTest {
                         + "T1,Ours,Error,error_rate,,25.0,percent,1000\n", PREDICTIONS, "line 3"));
         a.add(Arguments.of("test_size below subsample", "c.yaml", CLAIMS.replace("test_size: 1000", "test_size: 4"),
                 PREDICTIONS, "test_size 4"));
-        // deliverable 6: predictions files
-        a.add(Arguments.of("duplicate id", "c.yaml", CLAIMS, PREDICTIONS + "c,1,1,0.5\n", "line 8"));
-        a.add(Arguments.of("NaN score", "c.yaml", CLAIMS, PREDICTIONS.replace("0.4", "NaN"), "line 4"));
+        // deliverable 6: predictions files (duplicate id, NaN score, header only and ragged row are
+        // fixtures now: BadDataFilesTest, src/test/resources/bad/predictions/)
         a.add(Arguments.of("infinite score", "c.yaml", CLAIMS, PREDICTIONS.replace("0.4", "Infinity"), "line 4"));
         a.add(Arguments.of("score not a number", "c.yaml", CLAIMS, PREDICTIONS.replace("0.4", "high"), "line 4"));
         a.add(Arguments.of("empty file", "c.yaml", CLAIMS, "", "empty"));
-        a.add(Arguments.of("header only", "c.yaml", CLAIMS, "id,label,prediction,score\n", "line"));
-        a.add(Arguments.of("ragged row", "c.yaml", CLAIMS, PREDICTIONS.replace("c,1,0,0.4", "c,1,0"), "line 4"));
         a.add(Arguments.of("unknown predicted label", "c.yaml", CLAIMS, PREDICTIONS.replace("c,1,0,0.4", "c,1,7,0.4"), "line 4"));
         a.add(Arguments.of("missing id column", "c.yaml", CLAIMS, PREDICTIONS.replace("id,label", "key,label"), "--id-column"));
         a.add(Arguments.of("empty id", "c.yaml", CLAIMS, PREDICTIONS.replace("c,1,0,0.4", ",1,0,0.4"), "line 4"));

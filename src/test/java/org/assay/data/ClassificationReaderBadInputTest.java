@@ -101,6 +101,27 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
+    void aHeaderOfOneFieldHoldingAnotherSeparatorNamesTheSeparator() throws Exception {
+        assertFails(write(dir, "semi.csv", "id;label;prediction\nx;1;1\n"), "line 1",
+                "the header is one column 'id;label;prediction'", "separated by semicolons, not by commas",
+                "save it comma-separated");
+        assertFails(write(dir, "tabs.csv", "id\tlabel\tprediction\nx\t1\t1\n"), "line 1",
+                "separated by tabs, not by commas", "name a tab-separated file .tsv");
+        assertFails(write(dir, "commas.tsv", "id,label,prediction\nx,1,1\n"), "line 1",
+                "separated by commas, not by tabs", "name a comma-separated file .csv");
+    }
+
+    @Test
+    void leadingSpacesOfTheFirstFieldAreKeptAndBlankLinesStillSkipped() throws Exception {
+        // Jackson's SKIP_EMPTY_LINES would turn " d" into "d" (then a plain duplicate, or a silent match)
+        assertFails(write(dir, "lead.csv", "id,label,prediction\nd,1,1\n\n   \n d,0,0\n"), "line 5",
+                "id ' d' differs from id 'd' on line 2 only by surrounding whitespace");
+        ClassificationData data = ClassificationReader.read(
+                write(dir, "blank.csv", "id,label,prediction\n\n d,1,1\n \t \ne,0,0\n\n"), ReadOptions.defaults());
+        assertThat(data.ids()).containsExactly(" d", "e");
+    }
+
+    @Test
     void unterminatedQuote() throws Exception {
         assertFails(write(dir, "quote.csv", "id,label,prediction\nx,1,1\n\"y,1,1\n"), "line 3",
                 "cannot parse the row", "Missing closing quote", "closing double quote");
@@ -113,11 +134,21 @@ class ClassificationReaderBadInputTest {
     }
 
     @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {"Abc|abc", "' abc'|abc", "'ABC '|abc"})
-    void idsDifferingOnlyByCaseOrSurroundingSpace(String second, String first) throws Exception {
+    @CsvSource(delimiter = '|', value = {"' abc'|abc|surrounding whitespace", "'ABC '|abc|case and surrounding whitespace"})
+    void idsDifferingBySurroundingSpace(String second, String first, String how) throws Exception {
         Path file = write(dir, "near.csv", "id,label,prediction\n" + first + ",1,1\n\"" + second + "\",1,1\n");
         assertFails(file, "line 3", "id '" + second + "' differs from id 'abc' on line 2",
-                "only by case or surrounding whitespace", "formatting mismatch");
+                "only by " + how + ",", "formatting mismatch");
+    }
+
+    @Test
+    void idsDifferingOnlyByCaseAreDifferentExamplesWithAWarning() throws Exception {
+        Path file = write(dir, "cased.csv", "id,label,prediction\nabc,1,1\nAbc,0,1\naBC,1,0\nx,0,0\n");
+        ClassificationData data = ClassificationReader.read(file, ReadOptions.defaults());
+        assertThat(data.ids()).containsExactly("abc", "Abc", "aBC", "x");
+        assertThat(data.warnings()).singleElement().asString().startsWith("WARNING " + file)
+                .contains("id 'Abc' on line 3 differs from id 'abc' on line 2 only by case")
+                .contains("2 ids differ from an earlier one only by case");
     }
 
     @Test
@@ -258,9 +289,16 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
-    void jsonScoreWrittenAsAString() throws Exception {
-        assertFails(write(dir, "text.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": \"0.5\"}\n"),
-                "line 1", "field 'score' must be a JSON number", "without quotes");
+    void jsonScoreWrittenAsAStringIsReadAsTheNumberButStillStrictly() throws Exception {
+        Path quoted = write(dir, "text.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": \"0.5\"}\n"
+                + "{\"id\": \"y\", \"label\": 0, \"score\": 0.25}\n");
+        ClassificationData data = ClassificationReader.read(quoted, ReadOptions.defaults());
+        assertThat(data.scores()).containsExactly(0.5, 0.25);
+        assertFails(write(dir, "nan.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": 0.5}\n"
+                        + "{\"id\": \"y\", \"label\": 0, \"score\": \"NaN\"}\n"),
+                "line 2", "'score' value 'NaN' is NaN or infinite");
+        assertFails(write(dir, "comma.jsonl", "{\"id\": \"x\", \"label\": 1, \"p_1\": \"0,5\", \"p_0\": 0.5}\n"),
+                "line 1", "'p_1' value '0,5' is not a number");
     }
 
     @Test

@@ -98,7 +98,7 @@ class ClassificationReaderTruthAndManifestTest {
     void manifestWithOnlyCommentsIsAnError(@TempDir Path dir) throws Exception {
         Path manifest = write(dir, "comments.txt", "# seed: 1\n\n");
         assertUserError(() -> ClassificationReader.read(PREDICTIONS, WITH_TRUTH.withManifest(manifest)),
-                manifest, null, "the manifest lists no ids");
+                manifest, "lines 1-2", "the manifest lists no ids, only comments");
     }
 
     @Test

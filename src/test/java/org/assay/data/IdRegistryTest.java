@@ -41,7 +41,31 @@ class IdRegistryTest {
         assertThatThrownBy(() -> ids.add(pair[1], 9)).isInstanceOf(UserInputException.class)
                 .hasMessageContaining("duplicate id '" + pair[1] + "' (also on line 3)");
         assertThatThrownBy(() -> ids.add(" " + pair[0].toUpperCase(), 9)).isInstanceOf(UserInputException.class)
-                .hasMessageContaining("differs from id '" + pair[0] + "' on line 2 only by case or surrounding whitespace");
+                .hasMessageContaining("differs from id '" + pair[0] + "' on line 2 only by case and surrounding whitespace");
+        assertThatThrownBy(() -> ids.add(pair[1] + "\t", 9)).isInstanceOf(UserInputException.class)
+                .hasMessageContaining("differs from id '" + pair[1] + "' on line 3 only by surrounding whitespace");
+        assertThat(ids.caseWarning()).isEmpty();
+    }
+
+    @Test
+    void idsThatDifferOnlyByCaseAreKeptApartAndCounted() {
+        IdRegistry ids = new IdRegistry(FILE);
+        ids.add("img_a1", 2);
+        ids.add("IMG_A1", 3);
+        ids.add("Img_A1", 4);
+        ids.add("b", 5);
+        assertThat(ids.indexOf("IMG_A1")).isEqualTo(1);
+        assertThat(ids.indexOf("Img_A1")).isEqualTo(2);
+        assertThat(ids.indexOf("img_A1")).isEqualTo(-1);
+        assertThat(ids.indexOfSimilar("img_A1")).isEqualTo(0);   // the first of the variants
+        assertThat(ids.caseWarning()).hasValueSatisfying(w -> assertThat(w)
+                .contains("id 'IMG_A1' on line 3 differs from id 'img_a1' on line 2 only by case")
+                .contains("2 ids differ from an earlier one only by case"));
+        // an exact repeat of a later variant is still a duplicate, and whitespace still an error,
+        // even with a case variant earlier on the same probe run
+        assertThatThrownBy(() -> ids.add("Img_A1", 9)).hasMessageContaining("duplicate id 'Img_A1' (also on line 4)");
+        assertThatThrownBy(() -> ids.add("IMG_A1 ", 9)).hasMessageContaining("differs from id 'IMG_A1' on line 3 only by surrounding whitespace");
+        assertThatThrownBy(() -> ids.add(" iMG_a1", 9)).hasMessageContaining("differs from id 'img_a1' on line 2 only by case and surrounding");
     }
 
     @Test

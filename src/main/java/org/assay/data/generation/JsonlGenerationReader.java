@@ -61,6 +61,7 @@ final class JsonlGenerationReader {
         List<String> warnings = new ArrayList<>();
         String empty = GenerationReader.emptyHypotheses(emptyAt, ids.size());
         if (empty != null) warnings.add(file + ": " + empty);
+        unique.caseWarning().ifPresent(warnings::add);
         return new GenerationData(file, ids, hypotheses, references, warnings);
     }
 

@@ -1,6 +1,7 @@
 package org.assay.data.regression;
 
 import java.nio.file.Path;
+import java.util.List;
 import org.assay.common.Progress;
 import org.assay.data.DoubleColumn;
 import org.assay.data.TableRows;
@@ -42,7 +43,8 @@ public final class RegressionReader {
                 truth.add(rows.number(target));
                 predicted.add(rows.number(prediction));
             } while (rows.next());
-            return new RegressionData(file, rows.ids(), truth.toArray(), predicted.toArray());
+            return new RegressionData(file, rows.ids(), truth.toArray(), predicted.toArray(),
+                    rows.caseWarning().map(List::of).orElse(List.of()));
         }
     }
 }

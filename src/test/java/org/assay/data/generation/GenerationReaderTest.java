@@ -96,10 +96,17 @@ class GenerationReaderTest {
     }
 
     @Test
-    void duplicateIdsAndIdsDifferingOnlyByCaseOrSpaceAreErrors() throws Exception {
+    void duplicateIdsAndIdsDifferingBySpaceAreErrorsAndIdsDifferingOnlyByCaseAWarning() throws Exception {
         String a = "{\"id\": \"Item1\", \"hypothesis\": \"h\", \"references\": [\"r\"]}\n";
         assertJsonlFails(a + a, "line 2", "duplicate id 'Item1' (also on line 1)");
-        assertJsonlFails(a + a.replace("Item1", "item1 "), "line 2", "differs from id 'Item1' on line 1 only by case");
+        assertJsonlFails(a + a.replace("Item1", "item1 "), "line 2",
+                "differs from id 'Item1' on line 1 only by case and surrounding whitespace");
+        assertJsonlFails(a + a.replace("Item1", "Item1 "), "line 2",
+                "differs from id 'Item1' on line 1 only by surrounding whitespace");
+        GenerationData cased = GenerationReader.jsonl(write("cased.jsonl", a + a.replace("Item1", "ITEM1")));
+        assertThat(cased.ids()).containsExactly("Item1", "ITEM1");
+        assertThat(cased.warnings()).singleElement().asString()
+                .contains("id 'ITEM1' on line 2 differs from id 'Item1' on line 1 only by case");
         // a whole-number id and the same id as a string are the same id
         assertJsonlFails(a.replace("\"Item1\"", "12") + a.replace("Item1", "12"), "line 2", "duplicate id '12'");
     }

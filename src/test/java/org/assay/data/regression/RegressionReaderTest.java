@@ -95,9 +95,18 @@ class RegressionReaderTest {
     }
 
     @Test
-    void idsDifferingOnlyByCaseAreRejected() throws Exception {
+    void idsDifferingOnlyByCaseAreKeptWithAWarning() throws Exception {
         Path file = write("case.csv", "id,target,prediction\nItem7,1,2\nitem7,3,4\n");
-        assertFails(file, "line 3", "only by case or surrounding whitespace");
+        RegressionData d = read(file);
+        assertThat(d.ids()).containsExactly("Item7", "item7");
+        assertThat(d.warnings()).singleElement().asString().contains("case.csv")
+                .contains("id 'item7' on line 3 differs from id 'Item7' on line 2 only by case");
+    }
+
+    @Test
+    void idsDifferingBySurroundingSpaceAreRejected() throws Exception {
+        Path file = write("space.csv", "id,target,prediction\nItem7,1,2\n\" Item7\",3,4\n");
+        assertFails(file, "line 3", "only by surrounding whitespace");
     }
 
     @Test
