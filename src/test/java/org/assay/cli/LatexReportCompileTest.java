@@ -170,7 +170,7 @@ class LatexReportCompileTest {
         // pdflatex's own record of every file it opened (-recorder): it read only the document, its .aux and the
         // TeX installation's files, and wrote only the document's .aux, .log and .pdf (no pwned.tex, no /etc).
         // How it was checked: with Escape.latex returning its input unchanged, pdflatex stops at these labels
-        // (\\input{/etc/passwd} is tried first) and this test fails.
+        // (\input{/etc/passwd} is tried first) and this test fails.
         String stem = compiled.pdf().getFileName().toString().replaceFirst("\\.pdf$", "");
         assertThat(compiled.recorded()).as("the -recorder list").anyMatch(l -> l.replace("./", "").equals("INPUT " + stem + ".tex"));
         for (String line : compiled.recorded()) {
