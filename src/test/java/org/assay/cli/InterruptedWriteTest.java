@@ -31,7 +31,7 @@ import org.junit.jupiter.api.io.TempDir;
  * fails (the folder holds some new files and the rest old).
  */
 class InterruptedWriteTest {
-    private static final long PAUSE_MILLIS = 200;
+    private static final long PAUSE_MILLIS = 300;
     @TempDir static Path shared;
     @TempDir Path tmp;
     private static Path audit;
@@ -71,8 +71,8 @@ class InterruptedWriteTest {
 
     @Test
     void sigtermWhileComputingLeavesThePreviousReport() throws Exception {
-        // 100,000 resamples take about 7 s here; start-up and reading the demo take well under 2 s
-        Process p = start(100_000, 0);
+        // 1,000,000 resamples take about 15 s here (killed after 2 s); start-up and reading the demo take under 1 s
+        Process p = start(1_000_000, 0);
         assertThat(p.waitFor(2, TimeUnit.SECONDS)).as("still computing after 2 s").isFalse();
         p.destroy();
         assertStoppedBySigterm(p);
