@@ -87,6 +87,7 @@ public final class AuditFileReader {
         }
         JsonNode root;
         try {
+            refuseTags(file);
             root = new ObjectMapper(new YAMLFactory()).readTree(file.toFile());
         } catch (JsonMappingException e) {
             throw new UserInputException(file, line(e), "not a valid audit file: " + e.getOriginalMessage(),
@@ -182,6 +183,31 @@ public final class AuditFileReader {
             }
         }
         return new AuditFile(claims, out, margin, notes, templates, multiplicity, paired);
+    }
+
+    /** The core YAML tags (as Jackson reports them, without the leading '!'); "" is the non-specific tag '!'. */
+    private static final Set<String> CORE_TAGS = Set.of("", "tag:yaml.org,2002:str", "tag:yaml.org,2002:int",
+            "tag:yaml.org,2002:float", "tag:yaml.org,2002:bool", "tag:yaml.org,2002:null", "tag:yaml.org,2002:map",
+            "tag:yaml.org,2002:seq");
+
+    /**
+     * Refuses any explicit YAML tag other than the core ones ({@code !!java.net.URL [...]}, {@code !include
+     * /etc/passwd}...), with its line. Jackson builds plain trees and would ignore the tag, so nothing would
+     * be resolved anyway; refusing says so instead of quietly reading the tagged value as text.
+     */
+    private static void refuseTags(Path file) throws IOException {
+        try (com.fasterxml.jackson.core.JsonParser p = new YAMLFactory().createParser(file.toFile())) {
+            while (p.nextToken() != null) {
+                Object id = p.getTypeId();   // YAMLParser: the tag without its leading "!"s
+                String tag = id == null ? null : id.toString();
+                if (tag == null || CORE_TAGS.contains(tag)) continue;
+                String shown = tag.startsWith("tag:yaml.org,2002:") ? "!!" + tag.substring("tag:yaml.org,2002:".length())
+                        : "!" + tag;
+                throw new UserInputException(file, "line " + p.currentTokenLocation().getLineNr(),
+                        "the YAML tag " + shown + " is not allowed",
+                        "remove the tag; an audit file holds only plain strings, numbers, lists and mappings");
+            }
+        }
     }
 
     private static Task task(Path file, String at, String text) {

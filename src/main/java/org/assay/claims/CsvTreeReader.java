@@ -201,7 +201,7 @@ final class CsvTreeReader {
                     List<String> cells = new ArrayList<>();
                     while (parser.nextToken() != JsonToken.END_ARRAY) {
                         if (cells.isEmpty()) line = parser.currentTokenLocation().getLineNr();
-                        cells.add(parser.getText());
+                        cells.add(CsvFormulaGuard.unguard(parser.getText()));   // '=x written by the draft writer reads as =x
                     }
                     rows.add(new Row(line, cells));
                 }

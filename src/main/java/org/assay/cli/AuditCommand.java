@@ -124,10 +124,12 @@ final class AuditCommand implements Callable<Integer> {
         FailOn condition = FailOn.parse(failOn);
         var formats = report.formats();
         AuditRequest request = request();
+        OutputDirectory target = new OutputDirectory(out, force);
+        target.checkWritable(AuditReports.auditFileNames(formats));   // refuse before the work, not after
         AuditResult result = new Auditor(main.progress()).run(request);
         Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
                 report.templates(templatesFromFile));
-        List<Path> written = new OutputDirectory(out, force).write(files);
+        List<Path> written = target.write(files);
         var stdout = spec.commandLine().getOut();
         result.warnings().forEach(w -> spec.commandLine().getErr().println("assay: " + w));
         stdout.print(SummaryTable.render(result));

@@ -61,6 +61,7 @@ final class CheckCommand implements Callable<Integer> {
                     "use infeasible, any or never");
         }
         var formats = report.formats();
+        new OutputDirectory(out, force).checkWritable(AuditReports.checkFileNames(formats));   // refuse before the work
         CheckResult result = new ClaimChecker().check(ClaimsReader.read(claims));
         Map<String, String> files = AuditReports.check(result, ReportOptions.provenance(spec),
                 List.of(InputFile.of("claims", claims)), formats, report.templates(null));

@@ -70,14 +70,19 @@ final class DemoCommand implements Callable<Integer> {
         Map<String, byte[]> inputs = new LinkedHashMap<>();
         for (String f : names) inputs.put(f, resource("/examples/" + scenario + "/" + f));
         Path inputDir = out.resolve("inputs");
-        new OutputDirectory(inputDir, force).writeBytes(inputs);
+        OutputDirectory inputFolder = new OutputDirectory(inputDir, force);
+        OutputDirectory reportFolder = new OutputDirectory(out, force);
+        // check both folders before writing either, so a refusal leaves nothing half-written
+        inputFolder.checkWritable(inputs.keySet());
+        reportFolder.checkWritable(AuditReports.auditFileNames(formats));
+        inputFolder.writeBytes(inputs);
         AuditFileReader.AuditFile f = AuditFileReader.read(inputDir.resolve("audit.yaml"));
         double margin = f.marginPoints() == null ? 1.0 : f.marginPoints();
         AuditResult result = new Auditor(main.progress()).run(new AuditRequest(f.claims(), f.reproductions(),
                 estimation.settings(), margin / 100, f.notes(), f.multiplicity(), f.pairedMethod()));
         Map<String, String> files = AuditReports.audit(result, ReportOptions.provenance(spec), formats,
                 report.templates(f.templates()));
-        var written = new OutputDirectory(out, force).write(files);
+        var written = reportFolder.write(files);
         var stdout = spec.commandLine().getOut();
         stdout.print(SummaryTable.render(result));
         stdout.println("inputs copied to " + inputDir);

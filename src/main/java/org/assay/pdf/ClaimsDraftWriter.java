@@ -16,6 +16,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.assay.claims.CsvFormulaGuard;
 
 /**
  * Writes extracted tables as a claims draft in the claims-file format (DESIGN.md), with the
@@ -189,6 +190,8 @@ public final class ClaimsDraftWriter {
                 r.put("pm_kind", cell.parsed().pm() == null ? "" : "unknown");
                 r.put("caption", t.caption());
                 r.put("page", Integer.toString(cell.page()));
+                // labels come from someone else's PDF: no cell may open as a formula in a spreadsheet
+                r.replaceAll((column, value) -> CsvFormulaGuard.guard(value));
                 rows.add(r);
             }
         }

@@ -16,6 +16,28 @@ import org.assay.report.TemplateRenderer.Escaping;
 public final class AuditReports {
     private AuditReports() {}
 
+    /** The names of the files {@link #audit} writes for {@code formats}: checked before any work starts. */
+    public static java.util.List<String> auditFileNames(Set<ReportFormat> formats) {
+        java.util.List<String> names = new java.util.ArrayList<>();
+        if (formats.contains(ReportFormat.MD)) {
+            names.addAll(java.util.List.of("report.md", "replication-notes.md", "reviewer-comments.md", "claims-table.md"));
+        }
+        if (formats.contains(ReportFormat.HTML)) names.add("report.html");
+        if (formats.contains(ReportFormat.TEX)) names.add("claims-table.tex");
+        if (formats.contains(ReportFormat.JSON)) names.add("report.json");
+        return names;
+    }
+
+    /** The names of the files {@link #check} writes for {@code formats}. */
+    public static java.util.List<String> checkFileNames(Set<ReportFormat> formats) {
+        java.util.List<String> names = new java.util.ArrayList<>();
+        if (formats.contains(ReportFormat.MD)) names.addAll(java.util.List.of("check.md", "reviewer-comments.md"));
+        if (formats.contains(ReportFormat.HTML)) names.add("check.html");
+        if (formats.contains(ReportFormat.TEX)) names.add("check-findings.tex");
+        if (formats.contains(ReportFormat.JSON)) names.add("check.json");
+        return names;
+    }
+
     /** The files of an audit report in the chosen formats. */
     public static Map<String, String> audit(AuditResult r, Provenance p, Set<ReportFormat> formats, TemplateSource templates) {
         TemplateRenderer renderer = new TemplateRenderer(templates);

@@ -13,8 +13,9 @@ import org.assay.common.UserInputException;
 /**
  * Where report templates come from: a folder of the user's (from {@code assay init} or
  * {@code --template DIR}), falling back to the templates bundled in the jar for any file the
- * folder does not have. Only plain file names are looked up, never paths, so a template (or a
- * partial it includes) cannot read a file outside the folder.
+ * folder does not have. Only plain file names are looked up, never paths, and a name that is a
+ * symbolic link must lead to a file inside the folder, so a template (or a partial it includes)
+ * cannot read a file outside the folder.
  */
 public final class TemplateSource {
     private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_.-]{0,99}");
@@ -61,7 +62,7 @@ public final class TemplateSource {
         }
         if (folder != null) {
             Path p = folder.resolve(name);
-            if (Files.isRegularFile(p)) return read(p);
+            if (Files.isRegularFile(p)) return read(insideFolder(p));
         }
         try (InputStream in = TemplateSource.class.getResourceAsStream("/templates/" + name)) {
             if (in == null) {
@@ -72,6 +73,21 @@ public final class TemplateSource {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * {@code p}, when the file it finally names (after symbolic links) is inside the template folder: a
+     * plain name can still be a link, and a link to /etc/passwd or a colleague's home folder must not
+     * be read as a template.
+     */
+    private Path insideFolder(Path p) {
+        try {
+            if (p.toRealPath().startsWith(folder.toRealPath())) return p;
+        } catch (IOException e) {
+            throw new UserInputException(p, null, "cannot read the template: " + e.getMessage(), "check the file");
+        }
+        throw new UserInputException(p, null, "the template is a link to a file outside the template folder",
+                "copy the file into the folder instead of linking to it");
     }
 
     private static String read(Path p) {

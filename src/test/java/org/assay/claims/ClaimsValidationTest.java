@@ -348,7 +348,8 @@ class ClaimsValidationTest {
 
     @ParameterizedTest
     @ValueSource(strings = {"!!java.lang.Runtime x", "!foo 50.0", "!!binary aGVsbG8=", "!<tag:example.com,2000:x> 1",
-            "!!set {a, b}", "!!python/object:os.system [ls]"})
+            "!!set {a, b}", "!!python/object:os.system [ls]", "!!java.net.URL [\"http://127.0.0.1:1/\"]",
+            "!!javax.script.ScriptEngineManager []", "!include /etc/passwd"})
     void customTagsAreRefused(String tagged) {
         UserInputException e = yamlRejected("""
                 - row: A

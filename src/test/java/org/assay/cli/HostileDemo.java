@@ -6,7 +6,8 @@ import java.nio.file.Path;
 /**
  * The birdcalls demo's inputs rewritten so that labels carry markup: the title and the reproduced row
  * hold {@code <script>} and {@code <img onerror>}, a table caption holds all five characters HTML must
- * escape, and two more tables are added, one reproduced (T3) and one not (T4).
+ * escape, and two more tables are added, one reproduced (T3, whose one claim's label is exactly {@code IMG})
+ * and one not (T4).
  */
 final class HostileDemo {
     static final String SCRIPT = "<script>alert(1)</script>";
@@ -31,8 +32,7 @@ final class HostileDemo {
                 "    caption: \"A second reproduced table\"",
                 "    test_size: 4000",
                 "    claims:",
-                "      - row: " + yaml(ROW),
-                "        column: [\"Accuracy\"]",
+                "      - row: " + yaml(IMG),   // no column: the claim's label is exactly IMG
                 "        metric: accuracy",
                 "        value: \"86.0\"",
                 "        scale: percent",
@@ -50,7 +50,7 @@ final class HostileDemo {
         String a = Files.readString(audit).replace("\"ChirpNet (ours)\"", yaml(ROW));
         a += String.join("\n",
                 "  - table: T3",
-                "    row: " + yaml(ROW),
+                "    row: " + yaml(IMG),
                 "    predictions: predictions.csv",
                 "    manifest: subsample.txt",
                 "    columns: {id: clip_id, label: species, prediction: predicted}", "");

@@ -94,6 +94,15 @@ class HtmlReportBrowserTest {
         assertThat(dom.select("svg.forest-plot")).hasSize(2);
         assertThat(dom.select("section.audited-table[data-table=T4]")).isEmpty();
         assertThat(dom.select("svg.forest-plot .claim-label").first().text()).startsWith(HostileDemo.ROW);
+        // a claim labelled exactly <img src=x onerror=alert(1)> (table T3) is that text in the claims table and in
+        // its forest plot, and no element. How it was checked: with Escape.html returning its input unchanged,
+        // Chromium builds script and img elements from the labels and this test fails on the checks above.
+        Element t3 = dom.selectFirst("section.audited-table[data-table=T3]");
+        assertThat(t3).isNotNull();
+        assertThat(t3.select("svg.forest-plot .claim-label").eachText()).singleElement().asString()
+                .startsWith(HostileDemo.IMG + " — accuracy");
+        assertThat(t3.select("table.claims td").eachText()).anyMatch(td -> td.startsWith(HostileDemo.IMG));
+        assertThat(t3.text()).contains(HostileDemo.IMG);
     }
 
     @Test

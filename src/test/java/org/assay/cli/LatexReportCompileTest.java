@@ -104,7 +104,8 @@ class LatexReportCompileTest {
     // Labels a claims file could carry: LaTeX specials, commands that would read a file or run a program,
     // TeX's ^^ notation, catcode changes, T1 ligatures, brackets and a star where LaTeX looks for optional
     // arguments, symbols, Greek and CJK (invented).
-    private static final String ROW = "[x] \\input{/etc/passwd} \\write18{pwned} 模型 (ours)";
+    private static final String ROW = "[x] \\input{/etc/passwd} \\write18{pwned} 模型 (ours) a~b "
+            + "\\immediate\\openout5=pwned.tex \\openin5=/etc/hostname";
     private static final String BASELINE = "*Baseline_CNN \\catcode`\\{=12 ^^5c^^5c 100% #1 $x$ & {y}";
     private static final String COLUMN = "Accuracy --- ''q'' ,,x";
     private static final String CAPTION = "Photo→Caption ≠ ± – ’ é α ≤ §3 “q” Σ 中文 \\end{document}";
@@ -113,7 +114,8 @@ class LatexReportCompileTest {
     /** Every space-free piece of the hostile labels, as pdftotext reads it back (T1 prints ' as ’). */
     private static final List<String> SHOWN = List.of("[x]", "\\input{/etc/passwd}", "\\write18{pwned}",
             "[U+6A21][U+578B]", "Accuracy", "---", "’’q’’", ",,x", "Photo→Caption", "≠", "±", "–", "’", "é", "α", "≤",
-            "§3", "“q”", "Σ", "[U+4E2D][U+6587]", "\\end{document}", "Hostile", "\\def\\x{}", "\\end{tabular}");
+            "§3", "“q”", "Σ", "[U+4E2D][U+6587]", "\\end{document}", "Hostile", "\\def\\x{}", "\\end{tabular}", "a~b",
+            "\\immediate\\openout5=pwned.tex", "\\openin5=/etc/hostname");
     private static final List<String> SHOWN_BASELINE = List.of("*Baseline_CNN", "\\catcode`\\{=12", "^^5c^^5c", "100%",
             "#1", "$x$", "&", "{y}");
 
@@ -159,12 +161,34 @@ class LatexReportCompileTest {
         assertShownAsText(Pdflatex.compile(tmp.resolve("check/check-findings.tex")), both);
     }
 
-    private static void assertShownAsText(Pdflatex.Result compiled, List<String> pieces) {
+    private static void assertShownAsText(Pdflatex.Result compiled, List<String> pieces) throws java.io.IOException {
         String text = Pdflatex.normalized(Pdflatex.text(compiled.pdf(), false));
         for (String piece : pieces) assertThat(text).as("the PDF's text").contains(piece);
         // nothing was run or read: no file opened by \input, no shell command attempted, no passwd content
         assertThat(compiled.log()).doesNotContain("/etc/passwd").doesNotContain("runsystem");
         assertThat(text).doesNotContain("root:");
+        // pdflatex's own record of every file it opened (-recorder): it read only the document, its .aux and the
+        // TeX installation's files, and wrote only the document's .aux, .log and .pdf (no pwned.tex, no /etc).
+        // How it was checked: with Escape.latex returning its input unchanged, pdflatex stops at these labels
+        // (\input{/etc/passwd} is tried first) and this test fails.
+        String stem = compiled.pdf().getFileName().toString().replaceFirst("\\.pdf$", "");
+        assertThat(compiled.recorded()).as("the -recorder list").anyMatch(l -> l.replace("./", "").equals("INPUT " + stem + ".tex"));
+        for (String line : compiled.recorded()) {
+            if (line.startsWith("PWD ")) continue;
+            String file = line.substring(line.indexOf(' ') + 1).replaceFirst("^\\./", "");
+            if (line.startsWith("INPUT ")) {
+                assertThat(file).as(line).matches("(" + java.util.regex.Pattern.quote(stem) + "\\.(tex|aux)"
+                        + "|/usr/share/(texlive|texmf|texmf-dist|fonts)/.*|/var/lib/texmf/.*|/etc/texmf/.*"
+                        + "|/usr/local/share/texmf/.*|.*/texmf[^/]*/.*)");
+                assertThat(file).as(line).doesNotContain("passwd").doesNotContain("hostname");
+            } else {
+                assertThat(line).as("pdflatex wrote only its own outputs").startsWith("OUTPUT ");
+                assertThat(file).as(line).isIn(stem + ".log", stem + ".aux", stem + ".pdf");
+            }
+        }
+        try (var files = Files.list(compiled.pdf().getParent())) {
+            assertThat(files.map(p -> p.getFileName().toString())).noneMatch(n -> n.startsWith("pwned"));
+        }
     }
 
     /** A YAML single-quoted scalar: only the quote itself is doubled. */

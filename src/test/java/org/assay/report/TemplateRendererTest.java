@@ -42,6 +42,40 @@ class TemplateRendererTest {
     }
 
     @Test
+    void noMethodIsCalledFromAnyScope() throws Exception {
+        // Object methods as sections and names, at the top (the model map) and inside a string's and a list's
+        // scope. How it was checked: with TemplateRenderer's MapObjectHandler replaced by mustache.java's
+        // ReflectionObjectHandler, this prints "[abc]" (toString), the byte array, "[false]" (isEmpty) and "[1]" (size).
+        String template = "[{{#toString}}T{{/toString}}][{{class.name}}][{{getClass}}][{{hashCode}}]"
+                + "{{#title}}[{{toString}}][{{class.simpleName}}][{{bytes}}][{{empty}}]{{/title}}"
+                + "{{#items}}[{{size}}][{{class}}]{{/items}}[{{items.size}}][{{items.0.class}}]";
+        String out = render(template, Map.of("title", "abc", "items", List.of("x")), Escaping.NONE);
+        assertThat(out).isEqualTo("[][][][][][][][][][][][]");
+    }
+
+    @Test
+    void aTemplateOrPartialThatLinksOutOfTheFolderIsRefused() throws Exception {
+        // a symbolic link inside the folder is a plain file name; what it points to must be inside too
+        Path outside = Files.writeString(dir.getParent().resolve("secret-" + dir.getFileName() + ".txt"), "SECRET");
+        try {
+            Files.createSymbolicLink(dir.resolve("link.mustache"), outside);
+            Files.createSymbolicLink(dir.resolve("passwd.mustache"), Path.of("/etc/passwd"));
+            for (String name : List.of("link.mustache", "passwd.mustache")) {
+                assertThatThrownBy(() -> render("a{{> " + name + "}}b", Map.of(), Escaping.NONE))
+                        .isInstanceOf(UserInputException.class).hasMessageContaining("outside the template folder");
+                assertThatThrownBy(() -> new TemplateRenderer(TemplateSource.folder(dir)).render(name, Map.of(), Escaping.NONE))
+                        .isInstanceOf(UserInputException.class).hasMessageContaining("outside the template folder");
+            }
+            // a link to a file in the same folder is fine
+            Files.writeString(dir.resolve("real.mustache"), "[{{x}}]");
+            Files.createSymbolicLink(dir.resolve("alias.mustache"), dir.resolve("real.mustache"));
+            assertThat(render("{{> alias.mustache}}", Map.of("x", "1"), Escaping.NONE)).isEqualTo("[1]");
+        } finally {
+            Files.deleteIfExists(outside);
+        }
+    }
+
+    @Test
     void aValueThatLooksLikeATemplateIsNotRenderedAgain() throws Exception {
         String out = render("{{label}}", Map.of("label", "{{secret}} ${env:HOME}", "secret", "leak"), Escaping.NONE);
         assertThat(out).isEqualTo("{{secret}} ${env:HOME}");

@@ -24,8 +24,11 @@ public final class Pdflatex {
 
     private Pdflatex() {}
 
-    /** A compiled document: the PDF and pdflatex's log. */
-    public record Result(Path pdf, String log) {}
+    /**
+     * A compiled document: the PDF, pdflatex's log, and the files pdflatex opened (its {@code -recorder}
+     * .fls file: "INPUT path" and "OUTPUT path" lines, absolute or relative to the folder).
+     */
+    public record Result(Path pdf, String log, List<String> recorded) {}
 
     /**
      * Skips the calling test unless pdflatex, pdftotext and the packages are installed, and prints why
@@ -94,13 +97,15 @@ public final class Pdflatex {
         String name = tex.getFileName().toString();
         String stem = name.substring(0, name.length() - ".tex".length());
         for (int pass = 1; pass <= 2; pass++) {
-            Finished f = execute(dir, 300, "pdflatex", "-interaction=nonstopmode", "-halt-on-error", "-no-shell-escape", name);
+            Finished f = execute(dir, 300, "pdflatex", "-interaction=nonstopmode", "-halt-on-error", "-no-shell-escape",
+                    "-recorder", name);
             if (f.exitCode() != 0) {
                 throw new AssertionError("pdflatex failed on " + name + " (pass " + pass + "):\n" + tail(f.output(), 40));
             }
         }
         try {
-            return new Result(dir.resolve(stem + ".pdf"), Files.readString(dir.resolve(stem + ".log"), StandardCharsets.ISO_8859_1));
+            return new Result(dir.resolve(stem + ".pdf"), Files.readString(dir.resolve(stem + ".log"), StandardCharsets.ISO_8859_1),
+                    Files.readAllLines(dir.resolve(stem + ".fls"), StandardCharsets.ISO_8859_1));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
