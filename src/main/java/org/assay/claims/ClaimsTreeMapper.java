@@ -111,8 +111,23 @@ final class ClaimsTreeMapper {
             throw fail(list, claimsAt, "the claims list of " + what + " is empty", "add at least one claim");
         }
         List<Claim> claims = new ArrayList<>();
+        Map<List<Object>, Claim> seen = new HashMap<>();
         for (int i = 0; i < list.items().size(); i++) {
-            claims.add(claim(list.items().get(i), claimsAt.appendIndex(i), id, i, tableScale, tableMargin));
+            Claim claim = claim(list.items().get(i), claimsAt.appendIndex(i), id, i, tableScale, tableMargin);
+            // One printed cell is one claim: a second claim on the same cell and metric would be audited
+            // twice (and, with another value, contradict the first), so it is refused rather than counted.
+            // Claims with neither row nor column name no cell and are left alone.
+            boolean namesACell = claim.row() != null || (claim.column() != null && !claim.column().isEmpty());
+            Claim earlier = !namesACell ? null : seen.putIfAbsent(java.util.Arrays.asList(claim.row(), claim.column(), claim.metric(),
+                    claim.params()), claim);
+            if (earlier != null) {
+                throw new UserInputException(file, claim.location().describe(),
+                        "claim " + (i + 1) + " of " + what + " repeats the row, column and metric of the claim at "
+                                + earlier.location().describe() + " (values " + quote(earlier.value().text()) + " and "
+                                + quote(claim.value().text()) + ")",
+                        "keep one of the two, or give them different rows or columns");
+            }
+            claims.add(claim);
         }
         return new ClaimTable(id, caption, testSize, runs, claims, classCounts(t, at, what), compare(t, at, what));
     }

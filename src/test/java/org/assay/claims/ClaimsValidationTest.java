@@ -588,4 +588,37 @@ class ClaimsValidationTest {
                 """)));
         assertThat(f.allClaims().get(0).row()).isEqualTo("A \uD83D\uDE00 \u00E9");
     }
+
+    @Test
+    void duplicateClaimNamesBothLines() {
+        UserInputException e = yamlRejected("""
+                - row: A
+                  column: [Acc]
+                  metric: accuracy
+                  value: "50.0"
+                  scale: percent
+                - row: B
+                  column: [Acc]
+                  metric: accuracy
+                  value: "51.0"
+                  scale: percent
+                - row: A
+                  column: [Acc]
+                  metric: accuracy
+                  value: "52.0"
+                  scale: percent
+                """);
+        assertNames(e, "claims.yaml", "line 15", "repeats the row, column and metric of the claim at line 5", "keep one");
+        assertThat(e.problem()).contains("\"50.0\"").contains("\"52.0\"");
+    }
+
+    @Test
+    void sameCellWithAnotherMetricOrParamsIsNotADuplicate() {
+        ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
+                - {row: A, column: [R], metric: recall_at_k, params: {k: 1}, value: "50.0", scale: percent}
+                - {row: A, column: [R], metric: recall_at_k, params: {k: 5}, value: "60.0", scale: percent}
+                - {row: A, column: [R], metric: accuracy, value: "70.0", scale: percent}
+                """)));
+        assertThat(f.allClaims()).hasSize(3);
+    }
 }
