@@ -202,4 +202,22 @@ class ClaimCheckerTest {
         assertThat(of(stated, "configuration", CheckKind.QUESTIONABLE)).isEmpty();
         assertThat(stated.checksRun()).containsEntry("configuration", 2);
     }
+
+    @Test
+    void unknownMetric() throws Exception {
+        // a typo one edit from a registered id: named, with the nearest id, and listed as not checked
+        CheckResult typo = check("test_size: 1000", "{row: A, column: [Acc], metric: acuracy, value: \"94.13\", scale: percent}");
+        assertThat(of(typo, "metric", CheckKind.NOT_CHECKED)).singleElement().satisfies(f -> {
+            assertThat(f.message()).contains("'acuracy'").contains("perhaps accuracy").contains("line 5");
+            assertThat(f.claims()).singleElement().satisfies(c -> assertThat(c.metric()).isEqualTo("acuracy"));
+        });
+        // extract's placeholder says the metric was never set; far from every id, so no guess
+        CheckResult placeholder = check("", "{row: A, column: [Params], metric: unknown, value: \"12\", scale: fraction}");
+        assertThat(of(placeholder, "metric", CheckKind.NOT_CHECKED)).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("no metric is set").doesNotContain("perhaps"));
+        // a known metric: quiet, but counted as checked
+        CheckResult known = check("test_size: 1000", acc("A", "94.1"));
+        assertThat(known.findings()).noneMatch(f -> f.rule().equals("metric"));
+        assertThat(known.checksRun()).containsEntry("metric", 1);
+    }
 }
