@@ -1,9 +1,14 @@
 package org.assay.audit;
 
-import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.util.JsonParserDelegate;
+import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +25,7 @@ import org.assay.data.retrieval.SentinelRule;
 import org.assay.data.retrieval.TiePolicy;
 import org.assay.metrics.Task;
 import org.assay.stats.MultiplicityMethod;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
 
 /**
  * Reads an audit file: the claims file and, per reproduced table row, the predictions and how
@@ -79,18 +85,72 @@ public final class AuditFileReader {
     public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints, UserNotes notes,
                             Path templates, MultiplicityMethod multiplicity, PairedMethod pairedMethod) {}
 
+    private static final YAMLFactory YAML = new YAMLFactory();
+    /** A key given twice would otherwise silently keep the last value. */
+    private static final ObjectMapper MAPPER = new ObjectMapper(YAML)
+            .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY);
+    private static final java.util.regex.Pattern DUPLICATE = java.util.regex.Pattern.compile("^Duplicate field '([^']*)'");
+    private static final String CORE_TAG = "tag:yaml.org,2002:";
+    private static final Set<String> CORE_TAGS = Set.of(CORE_TAG + "str", CORE_TAG + "int", CORE_TAG + "float",
+            CORE_TAG + "bool", CORE_TAG + "null", CORE_TAG + "map", CORE_TAG + "seq");
+
     private AuditFileReader() {}
+
+    /**
+     * Refuses YAML tags other than the core ones and aliases. Jackson drops tags and reads an alias
+     * as its anchor's name, so {@code claims: !include other.yaml} or {@code predictions: *p} would
+     * otherwise be read as something the user did not write.
+     */
+    private static final class GuardedYaml extends JsonParserDelegate {
+        private final Path file;
+
+        GuardedYaml(Path file, JsonParser parser) {
+            super(parser);
+            this.file = file;
+        }
+
+        @Override
+        public JsonToken nextToken() throws IOException {
+            JsonToken token = super.nextToken();
+            if (token == null || token == JsonToken.FIELD_NAME || !(delegate instanceof YAMLParser yaml)) return token;
+            String where = "line " + yaml.currentTokenLocation().getLineNr();
+            if (yaml.isCurrentAlias()) {
+                throw new UserInputException(file, where, "YAML aliases (*" + yaml.getText() + ") are not allowed in an audit file",
+                        "write the value out instead of referring to an &anchor");
+            }
+            String tag = yaml.getTypeId();
+            if (tag != null && !CORE_TAGS.contains(tag) && !tag.isEmpty()) {
+                String shown = tag.startsWith(CORE_TAG) ? "!!" + tag.substring(CORE_TAG.length()) : "!" + tag;
+                throw new UserInputException(file, where, "the YAML tag " + shown + " is not allowed in an audit file",
+                        "remove the tag; an audit file holds only plain text, numbers, lists and mappings");
+            }
+            return token;
+        }
+    }
 
     public static AuditFile read(Path file) {
         if (!Files.isRegularFile(file)) {
             throw new UserInputException(file, null, "audit file not found", "check the path");
         }
         JsonNode root;
-        try {
-            root = new ObjectMapper(new YAMLFactory()).readTree(file.toFile());
-        } catch (JsonMappingException e) {
-            throw new UserInputException(file, line(e), "not a valid audit file: " + e.getOriginalMessage(),
-                    "see 'assay audit --help' for the format");
+        try (JsonParser parser = new GuardedYaml(file, YAML.createParser(file.toFile()))) {
+            root = MAPPER.readTree(parser);
+        } catch (UserInputException e) {
+            throw e;
+        } catch (JsonProcessingException e) {
+            java.util.regex.Matcher duplicate = DUPLICATE.matcher(e.getOriginalMessage());
+            if (duplicate.find()) {
+                throw new UserInputException(file, line(e), "the key '" + duplicate.group(1)
+                        + "' is given twice in one mapping", "keep one of the two");
+            }
+            String problem = e.getOriginalMessage().lines().findFirst().orElse("").strip();
+            String position = line(e);
+            if (e.getCause() instanceof MarkedYAMLException m) {
+                problem = (m.getContext() == null ? "" : m.getContext() + ": ") + m.getProblem();
+                if (m.getProblemMark() != null) position = "line " + (m.getProblemMark().getLine() + 1);
+            }
+            throw new UserInputException(file, position, "not a valid audit file: " + problem,
+                    "check the indentation, colons and brackets near this line; see 'assay audit --help' for the format");
         } catch (IOException e) {
             throw new UserInputException(file, null, "cannot read: " + e.getMessage(), "check the file");
         }
@@ -365,7 +425,7 @@ public final class AuditFileReader {
         return p;
     }
 
-    private static String line(JsonMappingException e) {
+    private static String line(JsonProcessingException e) {
         return e.getLocation() == null ? null : "line " + e.getLocation().getLineNr();
     }
 }
