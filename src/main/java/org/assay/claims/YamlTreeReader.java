@@ -84,18 +84,18 @@ final class YamlTreeReader {
         String position = line > 0 ? "line " + line : null;
         if (m.startsWith("Number of aliases")) {
             return new UserInputException(file, position,
-                    "too many YAML aliases to mappings or sequences (more than "
+                    "too many YAML aliases to mappings or sequences (more than the limit of "
                             + InputLimits.MAX_COLLECTION_ALIASES + "); the file may be an alias bomb",
                     "write the values out instead of repeating them with *aliases", e);
         }
         if (m.startsWith("Nesting Depth")) {
             return new UserInputException(file, position,
-                    "mappings and sequences are nested more than " + InputLimits.MAX_DEPTH + " levels deep",
+                    "mappings and sequences are nested deeper than the limit of " + InputLimits.MAX_DEPTH + " levels",
                     "a claims file needs about six levels; check the indentation", e);
         }
         if (m.contains("code points")) {
             return new UserInputException(file, position,
-                    "the file is larger than " + InputLimits.MAX_FILE_BYTES + " characters",
+                    "the file is larger than the limit of " + InputLimits.MAX_FILE_BYTES + " characters",
                     "split the claims into smaller files", e);
         }
         return new UserInputException(file, position, "cannot read the YAML: " + m,
@@ -160,14 +160,14 @@ final class YamlTreeReader {
             if (depth == 2) topLine = line;
             if (++nodes > InputLimits.MAX_EXPANDED_NODES) {
                 throw new UserInputException(file, "line " + topLine,
-                        "the YAML expands to more than " + InputLimits.MAX_EXPANDED_NODES
+                        "the YAML expands to more than the limit of " + InputLimits.MAX_EXPANDED_NODES
                                 + " values through aliases; the file may be an alias bomb",
                         "write the values out instead of repeating them with *aliases");
             }
             if (depth > InputLimits.MAX_DEPTH) {
                 throw new UserInputException(file, "line " + line,
-                        "values are nested more than " + InputLimits.MAX_DEPTH
-                                + " levels deep (an alias may refer to a node that contains it)",
+                        "values are nested deeper than the limit of " + InputLimits.MAX_DEPTH
+                                + " levels (an alias may refer to a node that contains it)",
                         "remove the *alias that points back into its own anchor");
             }
             if (node instanceof ScalarNode s) {
