@@ -621,4 +621,13 @@ class ClaimsValidationTest {
                 """)));
         assertThat(f.allClaims()).hasSize(3);
     }
+
+    @Test
+    void csvWithAnotherSeparatorSaysWhichOne() {
+        for (String[] c : new String[][] {{";", "';'"}, {"\t", "tabs"}, {"|", "'|'"}}) {
+            String text = (HEADER + "T1,A,Acc,accuracy,,50.0,percent,100,1,,\n").replace(",", c[0]);
+            UserInputException e = rejected(write(dir, "claims.csv", text));
+            assertNames(e, "claims.csv", "line 1", "separated by " + c[1] + ", not commas", "commas between cells");
+        }
+    }
 }
