@@ -64,7 +64,7 @@ class BadInputCommandTest {
                         + "T1,Ours,Accuracy,accuracy,,75.0,percent,1000,1,,\n"
                         + "T1,Ours,Error,error_rate,,25.0,percent,1000\n", PREDICTIONS, "line 3"));
         a.add(Arguments.of("test_size below subsample", "c.yaml", CLAIMS.replace("test_size: 1000", "test_size: 4"),
-                PREDICTIONS, "test_size 4"));
+                PREDICTIONS, "line 5: table T1 has test_size 4"));
         // deliverable 6: predictions files
         a.add(Arguments.of("duplicate id", "c.yaml", CLAIMS, PREDICTIONS + "c,1,1,0.5\n", "line 8"));
         a.add(Arguments.of("NaN score", "c.yaml", CLAIMS, PREDICTIONS.replace("0.4", "NaN"), "line 4"));
