@@ -220,4 +220,16 @@ class ClaimCheckerTest {
         assertThat(known.findings()).noneMatch(f -> f.rule().equals("metric"));
         assertThat(known.checksRun()).containsEntry("metric", 1);
     }
+
+    @Test
+    void aValueAboveTheRangeIsReportedOnceAndBreaksNoOtherRule() throws Exception {
+        // accuracy lies in [0, 100] percent (its definition); 104.2 beside a valid row once stopped the
+        // gap rule's two-proportion test with an error that named no file
+        CheckResult r = check("test_size: 2000", acc("A", "104.2"), acc("B", "91.3"));
+        assertThat(of(r, "range", CheckKind.INFEASIBLE)).singleElement()
+                .satisfies(f -> assertThat(f.claims().get(0).value().text()).isEqualTo("104.2"));
+        assertThat(r.findings()).noneMatch(f -> f.rule().equals("gap"));
+        // the same pair inside the range is still compared
+        assertThat(check("test_size: 2000", acc("A", "94.2"), acc("B", "91.3")).checksRun()).containsEntry("gap", 1);
+    }
 }
