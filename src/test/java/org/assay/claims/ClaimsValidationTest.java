@@ -630,4 +630,38 @@ class ClaimsValidationTest {
             assertNames(e, "claims.csv", "line 1", "separated by " + c[1] + ", not commas", "commas between cells");
         }
     }
+
+    @Test
+    void aHugeExponentIsRefusedWithoutSpellingItOut() {
+        // spelling "1e999999999" out would take a billion digits (it once ran the JVM out of memory)
+        for (String huge : new String[] {"1e999999999", "1e99999999999", "-2.5E-999999999"}) {
+            UserInputException e = yamlRejected("""
+                    - row: A
+                      metric: accuracy
+                      value: "%s"
+                      scale: percent
+                    """.formatted(huge));
+            assertNames(e, "claims.yaml", "line 7", "is written with an exponent", "write the digits as printed");
+            assertThat(e.fix()).doesNotContain("for example");
+        }
+        // a short one still gets its plain form
+        UserInputException small = yamlRejected("""
+                - {row: A, metric: accuracy, value: "9.41e1", scale: percent}
+                """);
+        assertThat(small.fix()).endsWith("for example 94.1");
+    }
+
+    @Test
+    void moreDigitsThanAnyPrintedNumberIsRefused() {
+        // 34 digits once reached the exact granularity arithmetic and ended in an internal error
+        UserInputException e = yamlRejected("""
+                - {row: A, metric: accuracy, value: "94.10000000000000000000000000000001", scale: percent}
+                """);
+        assertNames(e, "claims.yaml", "line 5", "has 34 digits, more than the limit of 15", "exactly as the paper prints it");
+        // fifteen digits are still a number
+        ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
+                - {row: A, metric: accuracy, value: "0.9410000000000", scale: fraction}
+                """)));
+        assertThat(f.allClaims().get(0).value().decimals()).isEqualTo(13);
+    }
 }
