@@ -30,7 +30,7 @@ final class PrintedNumbers {
         String fix() { return fix; }
     }
 
-    /** Most digits a printed number may have: more than any table prints, few enough for exact arithmetic. */
+    /** Most digits a claim's value may have: more than any table prints, few enough for exact arithmetic. */
     static final int MAX_DIGITS = 15;
 
     private PrintedNumbers() {}
@@ -91,11 +91,12 @@ final class PrintedNumbers {
                     "drop the point: " + t.substring(0, t.length() - 1));
         }
         long digits = t.chars().filter(Character::isDigit).count();
-        if (digits > MAX_DIGITS) {
-            // No table prints that many; the exact feasibility arithmetic is sized for printed numbers.
+        if (what.equals("value") && digits > MAX_DIGITS) {
+            // No table prints that many; the exact feasibility arithmetic is sized for printed values.
+            // (pm and margin are kept as doubles, whose 17 significant digits the writer may spell out.)
             throw new NumberProblem(what + " " + quoted.substring(0, Math.min(quoted.length(), 40))
                     + (quoted.length() > 40 ? "...\"" : "") + " has " + digits + " digits, more than the limit of "
-                    + MAX_DIGITS + " for a printed number", "write the number exactly as the paper prints it");
+                    + MAX_DIGITS + " for a printed value", "write the number exactly as the paper prints it");
         }
         try {
             return PrintedValue.parse(t);

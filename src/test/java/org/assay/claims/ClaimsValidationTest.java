@@ -658,6 +658,10 @@ class ClaimsValidationTest {
                 - {row: A, metric: accuracy, value: "94.10000000000000000000000000000001", scale: percent}
                 """);
         assertNames(e, "claims.yaml", "line 5", "has 34 digits, more than the limit of 15", "exactly as the paper prints it");
+        // a pm is kept as a double, so the writer's 17 significant digits still read back
+        assertThat(ClaimsReader.read(write(dir, "pm.yaml", yamlClaim("""
+                - {row: A, metric: accuracy, value: "50.0", scale: percent, pm: 0.30000000000000004, pm_kind: sd}
+                """))).allClaims().get(0).pm()).isEqualTo(0.1 + 0.2);
         // fifteen digits are still a number
         ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
                 - {row: A, metric: accuracy, value: "0.9410000000000", scale: fraction}
