@@ -668,4 +668,39 @@ class ClaimsValidationTest {
                 """)));
         assertThat(f.allClaims().get(0).value().decimals()).isEqualTo(13);
     }
+
+    @Test
+    void compareMustNameTwoRowsOfTheTable() {
+        String claims = """
+                tables:
+                  - id: T1
+                    test_size: 100
+                    compare: [[Ours, %s]]
+                    claims:
+                      - {row: Ours, column: [Acc], metric: accuracy, value: "50.0", scale: percent}
+                      - {row: Base, column: [Acc], metric: accuracy, value: "40.0", scale: percent}
+                """;
+        // a misspelt row once made the comparison vanish without a word
+        UserInputException e = rejected(write(dir, "claims.yaml", claims.formatted("Bsae")));
+        assertNames(e, "claims.yaml", "line 4", "compare names the row \"Bsae\", which has no claims in table T1",
+                "exactly as the claims");
+        e = rejected(write(dir, "claims.yaml", claims.formatted("Ours")));
+        assertNames(e, "claims.yaml", "line 4", "pairs the row \"Ours\" with itself", "two different rows");
+        e = rejected(write(dir, "claims.yaml", claims.formatted("~")));
+        assertNames(e, "claims.yaml", "line 4", "compare names the row \"null\"", "exactly as the claims");
+        assertThat(ClaimsReader.read(write(dir, "ok.yaml", claims.formatted("Base"))).tables().get(0).compare())
+                .containsExactly(java.util.List.of("Ours", "Base"));
+    }
+
+    @Test
+    void aClassCountTooLargeForANumberIsRefused() {
+        UserInputException e = rejected(write(dir, "claims.yaml", """
+                tables:
+                  - id: T1
+                    class_counts: {a: 99999999999999999999, b: 1}
+                    claims:
+                      - {row: Ours, column: [Acc], metric: accuracy, value: "50.0", scale: percent}
+                """));
+        assertNames(e, "claims.yaml", "line 3", "\"99999999999999999999\", too large", "number of test items");
+    }
 }
