@@ -74,6 +74,12 @@ public final class AuditFileReader {
             "notes", "claim_notes");
     private static final Set<String> DIRECTION = Set.of("column", "scores", "ranked", "side", "relevance", "group_size",
             "sentinel");
+    /** Fields that hold one value (text or a number), never a list or a mapping. */
+    private static final Set<String> SINGLE_VALUES = Set.of("claims", "margin", "templates", "multiplicity", "paired_test",
+            "table", "row", "task", "predictions", "manifest", "truth", "positive", "ties", "column", "scores", "ranked",
+            "side", "relevance", "group_size", "sentinel", "id", "label", "prediction", "score", "probability_prefix",
+            "target");
+    private static final Set<String> MAPPINGS = Set.of("columns", "claim_notes");
     private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
     private static final Set<String> REGRESSION_COLUMNS = Set.of("id", "target", "prediction");
 
@@ -168,6 +174,10 @@ public final class AuditFileReader {
                 throw new UserInputException(file, "/margin", "margin must be a number of points", "for example margin: 1.0");
             }
             margin = root.get("margin").asDouble();
+            if (!(margin > 0 && margin < 100)) {
+                throw new UserInputException(file, "/margin", "margin " + root.get("margin").asText()
+                        + " points is outside (0, 100)", "for example margin: 1.0 (one percentage point)");
+            }
         }
         JsonNode list = root.get("reproductions");
         if (list == null || !list.isArray() || list.isEmpty()) {
@@ -407,7 +417,29 @@ public final class AuditFileReader {
                 throw new UserInputException(file, at + "/" + f, "unknown field '" + f + "'",
                         "allowed here: " + String.join(", ", new java.util.TreeSet<>(allowed)));
             }
+            // Jackson reads a list or mapping as the text "" where one value belongs, which would name the
+            // audit file's own folder as a path or an empty column name: refuse the shape here instead.
+            JsonNode v = node.get(f);
+            if (SINGLE_VALUES.contains(f) && v.isContainerNode()) {
+                throw new UserInputException(file, at + "/" + f, f + " is a " + (v.isArray() ? "list" : "mapping")
+                        + " where one value belongs", "write one value, for example " + f + ": " + example(f));
+            }
+            if (MAPPINGS.contains(f) && !v.isObject() && !v.isNull()) {
+                throw new UserInputException(file, at + "/" + f, f + " must be a mapping of names to values",
+                        "for example " + f + ": " + (f.equals("columns") ? "{id: clip, label: species}"
+                                : "{\"Accuracy\": \"a note\"}"));
+            }
         }
+    }
+
+    private static String example(String field) {
+        return switch (field) {
+            case "claims" -> "claims.yaml";
+            case "predictions", "truth", "scores", "ranked", "relevance" -> "predictions.csv";
+            case "manifest" -> "manifest.txt";
+            case "margin" -> "1.0";
+            default -> "\"...\"";
+        };
     }
 
     private static String text(JsonNode n, String field, String fallback) {

@@ -70,4 +70,30 @@ class AuditFileReaderTest {
         assertThat(e.position()).isEqualTo("line 3");
         assertThat(e.problem()).contains("expected the node content");
     }
+
+    @Test
+    void aListOrMappingWhereOneValueBelongsIsRefused() throws Exception {
+        // Jackson's asText() gives "" for a list, which resolved to the audit file's own folder
+        UserInputException e = refused("claims: [claims.yaml]\nreproductions:\n  - predictions: p.csv\n");
+        assertThat(e.position()).isEqualTo("/claims");
+        assertThat(e.problem()).isEqualTo("claims is a list where one value belongs");
+        e = refused("claims: claims.yaml\nreproductions:\n  - predictions: p.csv\n    positive: {a: 1}\n");
+        assertThat(e.position()).isEqualTo("/reproductions/0/positive");
+        assertThat(e.problem()).contains("mapping where one value belongs");
+        e = refused("claims: claims.yaml\nreproductions:\n  - predictions: p.csv\n    columns: {id: [a, b]}\n");
+        assertThat(e.position()).isEqualTo("/reproductions/0/columns/id");
+        // and columns written as a list were ignored, reading the default columns instead
+        e = refused("claims: claims.yaml\nreproductions:\n  - predictions: p.csv\n    columns: [clip, species]\n");
+        assertThat(e.position()).isEqualTo("/reproductions/0/columns");
+        assertThat(e.problem()).contains("must be a mapping");
+    }
+
+    @Test
+    void aMarginOutsideTheRangeNamesTheField() throws Exception {
+        for (String m : new String[] {"-5", "0", "100", "1e308"}) {
+            UserInputException e = refused("claims: claims.yaml\nmargin: " + m + "\nreproductions:\n  - predictions: p.csv\n");
+            assertThat(e.position()).isEqualTo("/margin");
+            assertThat(e.problem()).contains("outside (0, 100)");
+        }
+    }
 }
