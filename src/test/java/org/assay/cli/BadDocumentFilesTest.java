@@ -88,6 +88,12 @@ class BadDocumentFilesTest {
         a.add(Arguments.of("claims/tag-python-object.yaml", "line 4", "the YAML tag !!python/object/apply:os.system is not allowed"));
         a.add(Arguments.of("claims/duplicate-key.json", "/tables/0/claims/0/value (line 2)", "\"value\" appears twice"));
         a.add(Arguments.of("claims/semicolon-delimiter.csv", "line 1", "separated by ';', not commas"));
+        // spelling 1e999999999 out once ran the JVM out of memory
+        a.add(Arguments.of("claims/exponent-overflow.yaml", "line 10", "\"1e999999999\" is written with an exponent"));
+        // 34 digits once reached the exact granularity arithmetic and ended in an internal error
+        a.add(Arguments.of("claims/too-many-digits.yaml", "line 10", "has 34 digits, more than the limit of 15"));
+        // a misspelt row in compare once made the comparison vanish without a word
+        a.add(Arguments.of("claims/compare-unknown-row.yaml", "line 6", "compare names the row \"Baseilne\""));
         return a.stream();
     }
 
@@ -233,7 +239,11 @@ class BadDocumentFilesTest {
                 Arguments.of("audit-files/duplicate-key.yaml", "line 7", "the key 'predictions' is given twice"),
                 Arguments.of("audit-files/custom-tag.yaml", "line 2", "the YAML tag !include is not allowed"),
                 Arguments.of("audit-files/alias.yaml", "line 6", "YAML aliases (*p) are not allowed"),
-                Arguments.of("audit-files/syntax-error.yaml", "line 4", "expected ',' or ']'"));
+                Arguments.of("audit-files/syntax-error.yaml", "line 4", "expected ',' or ']'"),
+                Arguments.of("audit-files/list-where-value-belongs.yaml", "/reproductions/0/predictions",
+                        "predictions is a list where one value belongs"),
+                Arguments.of("audit-files/columns-as-list.yaml", "/reproductions/0/columns", "columns must be a mapping"),
+                Arguments.of("audit-files/margin-out-of-range.yaml", "/margin", "margin 150 points is outside (0, 100)"));
     }
 
     @ParameterizedTest(name = "{0}")
@@ -343,6 +353,22 @@ class BadDocumentFilesTest {
             assertThat(files).containsExactly(withScript);
         }
         assertThat(Files.readString(withScript)).doesNotContain("launchURL").doesNotContain("127.0.0.1");
+    }
+
+    @Test
+    @Timeout(120)
+    void fiveThousandNestedFormsEndWithAnEmptyResult() throws Exception {
+        // generated here, never committed: each form draws the next, 5,000 deep (a stack-depth hazard)
+        Path pdf = Files.write(tmp.resolve("nested-forms.pdf"), BadPdfs.nestedForms(5_000));
+        Path draft = tmp.resolve("draft.yaml");
+        CliRun run = CliRun.of("extract", pdf.toString(), "--out", draft.toString());
+        if (run.exitCode() == 2) {
+            assertRejected(run, "nested-forms.pdf", "page 1", draft);
+        } else {
+            assertThat(run.exitCode()).as(run.err()).isZero();
+            assertThat(run.out()).contains("No tables found").contains("1 pages read");
+            assertThat(run.err()).isEmpty();
+        }
     }
 
     @Test

@@ -6,7 +6,9 @@ import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.cos.COSArray;
@@ -122,12 +124,49 @@ final class BadPdfs {
         }
     }
 
-    /** A document of {@code n} pages, each with one line of text (for the page limit). */
+    /** A document of {@code n} pages, each with one line of text (for the page limit); built by the test only. */
     static byte[] pages(int n) throws IOException {
         try (PDDocument doc = new PDDocument()) {
             for (int i = 1; i <= n; i++) doc.addPage(textPage(doc, "Page " + i + " of an invented report."));
             return save(doc);
         }
+    }
+
+    /**
+     * One page that draws form 1, which draws form 2, and so on {@code depth} deep. Written as raw PDF
+     * objects: PDFBox's own writer recurses through the chain and overflows its stack at this depth.
+     */
+    static byte[] nestedForms(int depth) {
+        List<String> objects = new ArrayList<>();   // object k + 1 is objects.get(k)
+        objects.add("<< /Type /Catalog /Pages 2 0 R >>");
+        objects.add("<< /Type /Pages /Kids [3 0 R] /Count 1 >>");
+        objects.add("<< /Type /Page /Parent 2 0 R /MediaBox [0 0 612 792] /Contents 4 0 R"
+                + " /Resources << /Font << /F1 5 0 R >> /XObject << /N 6 0 R >> >> >>");
+        objects.add(stream("", "BT /F1 10 Tf 72 700 Td (Table 1: An invented result inside nested forms.) Tj ET /N Do"));
+        objects.add("<< /Type /Font /Subtype /Type1 /BaseFont /Helvetica >>");
+        for (int i = 0; i < depth; i++) {
+            boolean last = i == depth - 1;
+            int next = 6 + i + 1;
+            objects.add(stream("/Type /XObject /Subtype /Form /BBox [0 0 100 100] /Resources "
+                    + (last ? "<< >>" : "<< /XObject << /N " + next + " 0 R >> >>") + " ",
+                    "0 0 m 1 1 l S" + (last ? "" : " /N Do")));
+        }
+        StringBuilder pdf = new StringBuilder("%PDF-1.4\n");
+        long[] offsets = new long[objects.size()];
+        for (int k = 0; k < objects.size(); k++) {
+            offsets[k] = pdf.length();   // ASCII only, so characters are bytes
+            pdf.append(k + 1).append(" 0 obj\n").append(objects.get(k)).append("\nendobj\n");
+        }
+        long xref = pdf.length();
+        pdf.append("xref\n0 ").append(objects.size() + 1).append("\n0000000000 65535 f \n");
+        for (long offset : offsets) pdf.append(String.format("%010d 00000 n \n", offset));
+        pdf.append("trailer\n<< /Size ").append(objects.size() + 1).append(" /Root 1 0 R >>\nstartxref\n")
+                .append(xref).append("\n%%EOF\n");
+        return pdf.toString().getBytes(StandardCharsets.US_ASCII);
+    }
+
+    private static String stream(String dictionary, String content) {
+        return "<< " + dictionary + "/Length " + content.length() + " >>\nstream\n" + content + "\nendstream";
     }
 
     private static PDPage textPage(PDDocument doc, String line) throws IOException {
