@@ -385,6 +385,8 @@ class BadDocumentFilesTest {
 
     @Test
     void theCommittedPdfsAreWhatBadPdfsMakes() throws Exception {
+        // make.sh is how they are regenerated: it must run this utility on this folder
+        assertThat(Files.readString(bad("pdf/make.sh"))).contains("org.assay.cli.BadPdfs src/test/resources/bad/pdf");
         for (Map.Entry<String, byte[]> e : BadPdfs.committed().entrySet()) {
             assertThat(Files.readAllBytes(bad("pdf/" + e.getKey())))
                     .as("%s differs from BadPdfs' output: run bash src/test/resources/bad/pdf/make.sh", e.getKey())
