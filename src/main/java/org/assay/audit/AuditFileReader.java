@@ -1,9 +1,14 @@
 package org.assay.audit;
 
-import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.util.JsonParserDelegate;
+import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +25,7 @@ import org.assay.data.retrieval.SentinelRule;
 import org.assay.data.retrieval.TiePolicy;
 import org.assay.metrics.Task;
 import org.assay.stats.MultiplicityMethod;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
 
 /**
  * Reads an audit file: the claims file and, per reproduced table row, the predictions and how
@@ -68,6 +74,12 @@ public final class AuditFileReader {
             "notes", "claim_notes");
     private static final Set<String> DIRECTION = Set.of("column", "scores", "ranked", "side", "relevance", "group_size",
             "sentinel");
+    /** Fields that hold one value (text or a number), never a list or a mapping. */
+    private static final Set<String> SINGLE_VALUES = Set.of("claims", "margin", "templates", "multiplicity", "paired_test",
+            "table", "row", "task", "predictions", "manifest", "truth", "positive", "ties", "column", "scores", "ranked",
+            "side", "relevance", "group_size", "sentinel", "id", "label", "prediction", "score", "probability_prefix",
+            "target");
+    private static final Set<String> MAPPINGS = Set.of("columns", "claim_notes");
     private static final Set<String> COLUMNS = Set.of("id", "label", "prediction", "score", "probability_prefix");
     private static final Set<String> REGRESSION_COLUMNS = Set.of("id", "target", "prediction");
 
@@ -79,19 +91,72 @@ public final class AuditFileReader {
     public record AuditFile(Path claims, List<Reproduction> reproductions, Double marginPoints, UserNotes notes,
                             Path templates, MultiplicityMethod multiplicity, PairedMethod pairedMethod) {}
 
+    private static final YAMLFactory YAML = new YAMLFactory();
+    /** A key given twice would otherwise silently keep the last value. */
+    private static final ObjectMapper MAPPER = new ObjectMapper(YAML)
+            .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY);
+    private static final java.util.regex.Pattern DUPLICATE = java.util.regex.Pattern.compile("^Duplicate field '([^']*)'");
+    private static final String CORE_TAG = "tag:yaml.org,2002:";
+    private static final Set<String> CORE_TAGS = Set.of(CORE_TAG + "str", CORE_TAG + "int", CORE_TAG + "float",
+            CORE_TAG + "bool", CORE_TAG + "null", CORE_TAG + "map", CORE_TAG + "seq");
+
     private AuditFileReader() {}
+
+    /**
+     * Refuses YAML tags other than the core ones and aliases. Jackson drops tags and reads an alias
+     * as its anchor's name, so {@code claims: !include other.yaml} or {@code predictions: *p} would
+     * otherwise be read as something the user did not write.
+     */
+    private static final class GuardedYaml extends JsonParserDelegate {
+        private final Path file;
+
+        GuardedYaml(Path file, JsonParser parser) {
+            super(parser);
+            this.file = file;
+        }
+
+        @Override
+        public JsonToken nextToken() throws IOException {
+            JsonToken token = super.nextToken();
+            if (token == null || token == JsonToken.FIELD_NAME || !(delegate instanceof YAMLParser yaml)) return token;
+            String where = "line " + yaml.currentTokenLocation().getLineNr();
+            if (yaml.isCurrentAlias()) {
+                throw new UserInputException(file, where, "YAML aliases (*" + yaml.getText() + ") are not allowed in an audit file",
+                        "write the value out instead of referring to an &anchor");
+            }
+            String tag = yaml.getTypeId();
+            if (tag != null && !CORE_TAGS.contains(tag) && !tag.isEmpty()) {
+                String shown = tag.startsWith(CORE_TAG) ? "!!" + tag.substring(CORE_TAG.length()) : "!" + tag;
+                throw new UserInputException(file, where, "the YAML tag " + shown + " is not allowed in an audit file",
+                        "remove the tag; an audit file holds only plain text, numbers, lists and mappings");
+            }
+            return token;
+        }
+    }
 
     public static AuditFile read(Path file) {
         if (!Files.isRegularFile(file)) {
             throw new UserInputException(file, null, "audit file not found", "check the path");
         }
         JsonNode root;
-        try {
-            refuseTags(file);
-            root = new ObjectMapper(new YAMLFactory()).readTree(file.toFile());
-        } catch (JsonMappingException e) {
-            throw new UserInputException(file, line(e), "not a valid audit file: " + e.getOriginalMessage(),
-                    "see 'assay audit --help' for the format");
+        try (JsonParser parser = new GuardedYaml(file, YAML.createParser(file.toFile()))) {
+            root = MAPPER.readTree(parser);
+        } catch (UserInputException e) {
+            throw e;
+        } catch (JsonProcessingException e) {
+            java.util.regex.Matcher duplicate = DUPLICATE.matcher(e.getOriginalMessage());
+            if (duplicate.find()) {
+                throw new UserInputException(file, line(e), "the key '" + duplicate.group(1)
+                        + "' is given twice in one mapping", "keep one of the two");
+            }
+            String problem = e.getOriginalMessage().lines().findFirst().orElse("").strip();
+            String position = line(e);
+            if (e.getCause() instanceof MarkedYAMLException m) {
+                problem = (m.getContext() == null ? "" : m.getContext() + ": ") + m.getProblem();
+                if (m.getProblemMark() != null) position = "line " + (m.getProblemMark().getLine() + 1);
+            }
+            throw new UserInputException(file, position, "not a valid audit file: " + problem,
+                    "check the indentation, colons and brackets near this line; see 'assay audit --help' for the format");
         } catch (IOException e) {
             throw new UserInputException(file, null, "cannot read: " + e.getMessage(), "check the file");
         }
@@ -109,6 +174,10 @@ public final class AuditFileReader {
                 throw new UserInputException(file, "/margin", "margin must be a number of points", "for example margin: 1.0");
             }
             margin = root.get("margin").asDouble();
+            if (!(margin > 0 && margin < 100)) {
+                throw new UserInputException(file, "/margin", "margin " + root.get("margin").asText()
+                        + " points is outside (0, 100)", "for example margin: 1.0 (one percentage point)");
+            }
         }
         JsonNode list = root.get("reproductions");
         if (list == null || !list.isArray() || list.isEmpty()) {
@@ -183,31 +252,6 @@ public final class AuditFileReader {
             }
         }
         return new AuditFile(claims, out, margin, notes, templates, multiplicity, paired);
-    }
-
-    /** The core YAML tags (as Jackson reports them, without the leading '!'); "" is the non-specific tag '!'. */
-    private static final Set<String> CORE_TAGS = Set.of("", "tag:yaml.org,2002:str", "tag:yaml.org,2002:int",
-            "tag:yaml.org,2002:float", "tag:yaml.org,2002:bool", "tag:yaml.org,2002:null", "tag:yaml.org,2002:map",
-            "tag:yaml.org,2002:seq");
-
-    /**
-     * Refuses any explicit YAML tag other than the core ones ({@code !!java.net.URL [...]}, {@code !include
-     * /etc/passwd}...), with its line. Jackson builds plain trees and would ignore the tag, so nothing would
-     * be resolved anyway; refusing says so instead of quietly reading the tagged value as text.
-     */
-    private static void refuseTags(Path file) throws IOException {
-        try (com.fasterxml.jackson.core.JsonParser p = new YAMLFactory().createParser(file.toFile())) {
-            while (p.nextToken() != null) {
-                Object id = p.getTypeId();   // YAMLParser: the tag without its leading "!"s
-                String tag = id == null ? null : id.toString();
-                if (tag == null || CORE_TAGS.contains(tag)) continue;
-                String shown = tag.startsWith("tag:yaml.org,2002:") ? "!!" + tag.substring("tag:yaml.org,2002:".length())
-                        : "!" + tag;
-                throw new UserInputException(file, "line " + p.currentTokenLocation().getLineNr(),
-                        "the YAML tag " + shown + " is not allowed",
-                        "remove the tag; an audit file holds only plain strings, numbers, lists and mappings");
-            }
-        }
     }
 
     private static Task task(Path file, String at, String text) {
@@ -373,7 +417,29 @@ public final class AuditFileReader {
                 throw new UserInputException(file, at + "/" + f, "unknown field '" + f + "'",
                         "allowed here: " + String.join(", ", new java.util.TreeSet<>(allowed)));
             }
+            // Jackson reads a list or mapping as the text "" where one value belongs, which would name the
+            // audit file's own folder as a path or an empty column name: refuse the shape here instead.
+            JsonNode v = node.get(f);
+            if (SINGLE_VALUES.contains(f) && v.isContainerNode()) {
+                throw new UserInputException(file, at + "/" + f, f + " is a " + (v.isArray() ? "list" : "mapping")
+                        + " where one value belongs", "write one value, for example " + f + ": " + example(f));
+            }
+            if (MAPPINGS.contains(f) && !v.isObject() && !v.isNull()) {
+                throw new UserInputException(file, at + "/" + f, f + " must be a mapping of names to values",
+                        "for example " + f + ": " + (f.equals("columns") ? "{id: clip, label: species}"
+                                : "{\"Accuracy\": \"a note\"}"));
+            }
         }
+    }
+
+    private static String example(String field) {
+        return switch (field) {
+            case "claims" -> "claims.yaml";
+            case "predictions", "truth", "scores", "ranked", "relevance" -> "predictions.csv";
+            case "manifest" -> "manifest.txt";
+            case "margin" -> "1.0";
+            default -> "\"...\"";
+        };
     }
 
     private static String text(JsonNode n, String field, String fallback) {
@@ -391,7 +457,7 @@ public final class AuditFileReader {
         return p;
     }
 
-    private static String line(JsonMappingException e) {
+    private static String line(JsonProcessingException e) {
         return e.getLocation() == null ? null : "line " + e.getLocation().getLineNr();
     }
 }

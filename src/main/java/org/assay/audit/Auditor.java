@@ -219,7 +219,9 @@ public final class Auditor {
 
     private static void checkSizes(ClaimsFile claims, ClaimTable table, EvaluationData data, Long population) {
         if (population != null && data.size() > population) {
-            throw new UserInputException(claims.file(), null, "table " + table.id() + " has test_size " + population
+            // The table keeps no line of its own; its first claim's line points the user at the table.
+            String at = table.claims().isEmpty() ? null : table.claims().get(0).location().describe();
+            throw new UserInputException(claims.file(), at, "table " + table.id() + " has test_size " + population
                     + " but the predictions " + data.source() + " hold " + data.size() + " examples",
                     "correct test_size, or check that the predictions belong to this table");
         }

@@ -1,15 +1,12 @@
 package org.assay.claims;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import org.assay.common.Limit;
 import org.assay.common.UserInputException;
+import org.assay.common.Utf8Text;
 
 /**
  * Reads a claims file in YAML ({@code .yaml}, {@code .yml}), JSON ({@code .json}) or CSV
@@ -45,17 +42,7 @@ public final class ClaimsReader {
             throw new UserInputException(file, null, "cannot read the file: " + e.getMessage(),
                     "check that it is a readable file", e);
         }
-        String text;
-        try {
-            text = StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes))
-                    .toString();
-        } catch (CharacterCodingException e) {
-            throw new UserInputException(file, null, "the file is not UTF-8 text",
-                    "save it with UTF-8 encoding", e);
-        }
+        String text = Utf8Text.decode(file, bytes);
         return text.startsWith("\uFEFF") ? text.substring(1) : text;
     }
 }

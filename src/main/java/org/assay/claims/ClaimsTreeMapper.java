@@ -111,10 +111,25 @@ final class ClaimsTreeMapper {
             throw fail(list, claimsAt, "the claims list of " + what + " is empty", "add at least one claim");
         }
         List<Claim> claims = new ArrayList<>();
+        Map<List<Object>, Claim> seen = new HashMap<>();
         for (int i = 0; i < list.items().size(); i++) {
-            claims.add(claim(list.items().get(i), claimsAt.appendIndex(i), id, i, tableScale, tableMargin));
+            Claim claim = claim(list.items().get(i), claimsAt.appendIndex(i), id, i, tableScale, tableMargin);
+            // One printed cell is one claim: a second claim on the same cell and metric would be audited
+            // twice (and, with another value, contradict the first), so it is refused rather than counted.
+            // Claims with neither row nor column name no cell and are left alone.
+            boolean namesACell = claim.row() != null || (claim.column() != null && !claim.column().isEmpty());
+            Claim earlier = !namesACell ? null : seen.putIfAbsent(java.util.Arrays.asList(claim.row(), claim.column(), claim.metric(),
+                    claim.params()), claim);
+            if (earlier != null) {
+                throw new UserInputException(file, claim.location().describe(),
+                        "claim " + (i + 1) + " of " + what + " repeats the row, column and metric of the claim at "
+                                + earlier.location().describe() + " (values " + quote(earlier.value().text()) + " and "
+                                + quote(claim.value().text()) + ")",
+                        "keep one of the two, or give them different rows or columns");
+            }
+            claims.add(claim);
         }
-        return new ClaimTable(id, caption, testSize, runs, claims, classCounts(t, at, what), compare(t, at, what));
+        return new ClaimTable(id, caption, testSize, runs, claims, classCounts(t, at, what), compare(t, at, what, claims));
     }
 
     private Claim claim(TreeNode node, JsonPointer at, String tableId, int index, Scale tableScale,
@@ -203,12 +218,18 @@ final class ClaimsTreeMapper {
                 throw fail(p.value(), pAt, "the count of class " + quote(p.key()) + " is " + quote(String.valueOf(s))
                         + ", not a whole number", "write the number of test items of that class, for example 120");
             }
-            counts.put(p.key(), Long.parseLong(s.strip().replace("+", "")));
+            try {
+                counts.put(p.key(), Long.parseLong(s.strip().replace("+", "")));
+            } catch (NumberFormatException tooLarge) {
+                throw fail(p.value(), pAt, "the count of class " + quote(p.key()) + " is " + quote(s.strip())
+                        + ", too large to be a number of test items", "write the number of test items of that class");
+            }
         }
         return counts;
     }
 
-    private List<List<String>> compare(TreeNode.Mapping t, JsonPointer at, String what) {
+    /** The compared pairs; each must name two different rows that have claims in this table (else nothing is compared). */
+    private List<List<String>> compare(TreeNode.Mapping t, JsonPointer at, String what, List<Claim> claims) {
         TreeNode.Entry e = t.entry("compare");
         if (e == null || isNull(e.value())) return List.of();
         JsonPointer cmpAt = at.appendProperty("compare");
@@ -221,8 +242,20 @@ final class ClaimsTreeMapper {
                 throw fail(item, itemAt, "each entry of compare must be a pair of row labels",
                         "write for example compare: [[\"Ours\", \"Baseline\"]]");
             }
-            pairs.add(List.of(text(pair.items().get(0), itemAt.appendIndex(0), "a row label"),
-                    text(pair.items().get(1), itemAt.appendIndex(1), "a row label")));
+            List<String> rows = new ArrayList<>();
+            for (int j = 0; j < 2; j++) {
+                String row = text(pair.items().get(j), itemAt.appendIndex(j), "a row label");
+                if (row == null || claims.stream().noneMatch(c -> row.equals(c.row()))) {
+                    throw fail(pair.items().get(j), itemAt.appendIndex(j), "compare names the row " + quote(String.valueOf(row))
+                            + ", which has no claims in " + what, "use a row label exactly as the claims of " + what + " give it");
+                }
+                rows.add(row);
+            }
+            if (rows.get(0).equals(rows.get(1))) {
+                throw fail(item, itemAt, "compare pairs the row " + quote(rows.get(0)) + " with itself",
+                        "name two different rows, for example compare: [[\"Ours\", \"Baseline\"]]");
+            }
+            pairs.add(List.copyOf(rows));
         }
         return pairs;
     }

@@ -167,6 +167,18 @@ final class CsvTreeReader {
         Map<String, Integer> index = new LinkedHashMap<>();
         List<String> allowed = new ArrayList<>(REQUIRED_COLUMNS);
         allowed.addAll(OPTIONAL_COLUMNS);
+        if (header.cells().size() == 1) {
+            // A spreadsheet saved with another separator gives one long header cell; say so, not "unknown column".
+            String only = header.cells().get(0);
+            for (String separator : List.of(";", "\t", "|")) {
+                if (only.contains(separator)) {
+                    String shown = separator.equals("\t") ? "tabs" : "'" + separator + "'";
+                    throw new UserInputException(file, "line " + header.line(),
+                            "the header is a single cell: the file is separated by " + shown + ", not commas",
+                            "save it as CSV with commas between cells (quote cells that contain commas)");
+                }
+            }
+        }
         for (int i = 0; i < header.cells().size(); i++) {
             String name = header.cells().get(i).strip();
             if (!allowed.contains(name)) {

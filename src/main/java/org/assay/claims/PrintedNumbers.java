@@ -30,6 +30,9 @@ final class PrintedNumbers {
         String fix() { return fix; }
     }
 
+    /** Most digits a claim's value may have: more than any table prints, few enough for exact arithmetic. */
+    static final int MAX_DIGITS = 15;
+
     private PrintedNumbers() {}
 
     /**
@@ -68,8 +71,16 @@ final class PrintedNumbers {
                     "write the number as printed; a claim cannot be NaN or infinite");
         }
         if (EXPONENT.matcher(t).matches()) {
+            // Spell the number out only when it is short: "1e999999999" would be a billion digits.
+            String plain = null;
+            try {
+                BigDecimal n = new BigDecimal(t);
+                if (n.precision() - n.scale() <= MAX_DIGITS && n.scale() <= MAX_DIGITS) plain = n.toPlainString();
+            } catch (NumberFormatException e) {
+                // an exponent beyond BigDecimal's range: no plain form to suggest
+            }
             throw new NumberProblem(what + " " + quoted + " is written with an exponent",
-                    "write the digits as printed, for example " + new BigDecimal(t).toPlainString());
+                    "write the digits as printed" + (plain == null ? "" : ", for example " + plain));
         }
         if (LEADING_DOT.matcher(t).matches()) {
             throw new NumberProblem(what + " " + quoted + " has no digit before the decimal point",
@@ -78,6 +89,14 @@ final class PrintedNumbers {
         if (TRAILING_DOT.matcher(t).matches()) {
             throw new NumberProblem(what + " " + quoted + " ends with a decimal point",
                     "drop the point: " + t.substring(0, t.length() - 1));
+        }
+        long digits = t.chars().filter(Character::isDigit).count();
+        if (what.equals("value") && digits > MAX_DIGITS) {
+            // No table prints that many; the exact feasibility arithmetic is sized for printed values.
+            // (pm and margin are kept as doubles, whose 17 significant digits the writer may spell out.)
+            throw new NumberProblem(what + " " + quoted.substring(0, Math.min(quoted.length(), 40))
+                    + (quoted.length() > 40 ? "...\"" : "") + " has " + digits + " digits, more than the limit of "
+                    + MAX_DIGITS + " for a printed value", "write the number exactly as the paper prints it");
         }
         try {
             return PrintedValue.parse(t);

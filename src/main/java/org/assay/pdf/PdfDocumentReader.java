@@ -88,9 +88,9 @@ public final class PdfDocumentReader {
     }
 
     private PageContent readPage(Path file, PDDocument doc, GlyphCollector glyphs, int p) throws IOException {
-        PDPage page = doc.getPage(p - 1);
-        PDRectangle box = page.getCropBox();
         try {
+            PDPage page = doc.getPage(p - 1);
+            PDRectangle box = page.getCropBox();
             PageBudget budget = new PageBudget(limits.maxOperatorsPage(), limits.millisPerPage());
             List<Glyph> g = glyphs.collect(doc, p, budget);
             List<Rule> r = new RuleCollector(page, budget).collect();
@@ -103,6 +103,12 @@ public final class PdfDocumentReader {
         } catch (StackOverflowError e) {
             throw new UserInputException(file, "page " + p, "the page's content is nested too deeply to read",
                     "use --pages to skip this page");
+        } catch (IOException | RuntimeException e) {
+            // A page the document cannot give (a page tree that loops back on itself, a broken page
+            // object) is named, so the user can skip it; the other pages may still be fine.
+            if (e instanceof UserInputException u) throw u;
+            throw new UserInputException(file, "page " + p, "the page cannot be read (" + shortReason(e) + ")",
+                    "use --pages to skip this page, or re-save the PDF from a PDF viewer", e);
         }
     }
 

@@ -2,7 +2,10 @@ package org.assay.report;
 
 import com.github.mustachejava.DefaultMustacheFactory;
 import com.github.mustachejava.Mustache;
+import com.github.mustachejava.DefaultMustacheVisitor;
 import com.github.mustachejava.MustacheException;
+import com.github.mustachejava.MustacheVisitor;
+import com.github.mustachejava.TemplateContext;
 import com.github.mustachejava.reflect.MapObjectHandler;
 import java.io.IOException;
 import java.io.Reader;
@@ -38,8 +41,12 @@ public final class TemplateRenderer {
             return out.toString();
         } catch (MustacheException e) {
             if (e.getCause() instanceof UserInputException u) throw u;
-            throw new UserInputException(source.folder() == null ? null : source.folder().resolve(name), null,
-                    "the template " + name + " does not compile: " + e.getMessage(),
+            // The context is where Mustache stopped: the template (or partial) and its line.
+            TemplateContext at = e.getContext();
+            String where = at == null ? name : at.file();
+            String problem = e.getMessage().replaceFirst("\\s*@\\[[^\\]]*\\]$", "");
+            throw new UserInputException(source.describe(where), at == null ? null : "line " + at.line(),
+                    "the template " + where + " does not compile: " + problem,
                     "fix the template, or copy a fresh one with 'assay init'");
         }
     }
@@ -59,6 +66,35 @@ public final class TemplateRenderer {
         @Override
         public Reader getReader(String resourceName) {
             return new StringReader(source.load(resourceName));
+        }
+
+        /** Checks each {{> partial}} where it is written, so a bad name is reported with its template and line. */
+        @Override
+        public MustacheVisitor createMustacheVisitor() {
+            return new DefaultMustacheVisitor(this) {
+                @Override
+                public void partial(TemplateContext tc, String variable, String indent) {
+                    if (!TemplateSource.isPlainName(variable.strip())) {
+                        throw new UserInputException(source.describe(tc.file()), "line " + tc.line(),
+                                "the partial '" + variable.strip() + "' is not a plain file name",
+                                "include partials of the template folder by file name only, such as {{> cautions.md.mustache}}");
+                    }
+                    if (!source.exists(variable.strip())) {
+                        throw new UserInputException(source.describe(tc.file()), "line " + tc.line(),
+                                "the partial '" + variable.strip() + "' is neither in the template folder nor shipped",
+                                "check the name, or copy the shipped templates with 'assay init'");
+                    }
+                    super.partial(tc, variable, indent);
+                }
+
+                @Override
+                public void dynamicPartial(TemplateContext tc, String variable, String indent) {
+                    // {{>*key}} would take the partial's name from the report model, that is, from the input files
+                    throw new UserInputException(source.describe(tc.file()), "line " + tc.line(),
+                            "dynamic partials ({{>" + variable.strip() + "}}) are not allowed",
+                            "name the partial's file directly, such as {{> cautions.md.mustache}}");
+                }
+            };
         }
 
         @Override

@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.regex.Pattern;
 import org.assay.common.Limit;
 import org.assay.common.UserInputException;
+import org.assay.common.Utf8Text;
 
 /**
  * Where report templates come from: a folder of the user's (from {@code assay init} or
@@ -56,7 +57,7 @@ public final class TemplateSource {
 
     /** The text of template {@code name} ("report.md.mustache"); partials are looked up the same way. */
     public String load(String name) {
-        if (!NAME.matcher(name).matches() || name.contains("..")) {
+        if (!isPlainName(name)) {
             throw new UserInputException(folder, null, "template name '" + name + "' is not a plain file name",
                     "include partials by file name only, such as {{> table-row.md.mustache}}");
         }
@@ -90,6 +91,24 @@ public final class TemplateSource {
                 "copy the file into the folder instead of linking to it");
     }
 
+    /** True for a name {@link #load} accepts: a file name of the folder, never a path. */
+    static boolean isPlainName(String name) {
+        return NAME.matcher(name).matches() && !name.contains("..");
+    }
+
+    /** True when {@link #load} finds template {@code name} (a plain name) in the folder or among the shipped ones. */
+    boolean exists(String name) {
+        if (!isPlainName(name)) return false;
+        if (folder != null && Files.isRegularFile(folder.resolve(name))) return true;
+        return TemplateSource.class.getResource("/templates/" + name) != null;
+    }
+
+    /** The file template {@code name} is read from, for messages: the user's copy, else just the name. */
+    Path describe(String name) {
+        return folder != null && isPlainName(name) && Files.isRegularFile(folder.resolve(name)) ? folder.resolve(name)
+                : Path.of(name);
+    }
+
     private static String read(Path p) {
         try {
             // Template files are small; a larger one is a mistake or a hostile file.
@@ -97,9 +116,7 @@ public final class TemplateSource {
             if (Limit.TEMPLATE_BYTES.exceededBy(size)) {
                 throw Limit.TEMPLATE_BYTES.exceeded(p, null, "the template has " + size + " bytes");
             }
-            return Files.readString(p, StandardCharsets.UTF_8);
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new UserInputException(p, null, "the template is not UTF-8 text", "save it as UTF-8");
+            return Utf8Text.decode(p, Files.readAllBytes(p));
         } catch (IOException e) {
             throw new UserInputException(p, null, "cannot read the template: " + e.getMessage(), "check the file");
         }

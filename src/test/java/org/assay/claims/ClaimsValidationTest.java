@@ -4,6 +4,7 @@ import static org.assay.claims.ClaimsTestSupport.rejected;
 import static org.assay.claims.ClaimsTestSupport.write;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import org.assay.common.UserInputException;
 import org.junit.jupiter.api.Test;
@@ -320,8 +321,8 @@ class ClaimsValidationTest {
         assertThat(e.where().getFileName()).hasToString("bomb.yaml");
         // 9 aliases per line from line 2: the 51st alias is on line 7
         assertThat(e.position()).isEqualTo("line 7");
-        assertThat(e.problem()).contains("too many YAML aliases").contains("50");
-        assertThat(e.fix()).contains("aliases");
+        assertThat(e.problem()).contains("too many YAML aliases").contains("limit yaml-aliases is 50");
+        assertThat(e.fix()).contains("--limit yaml-aliases=N");
     }
 
     @Test
@@ -426,8 +427,8 @@ class ClaimsValidationTest {
         Path p = dir.resolve("latin1.yaml");
         java.nio.file.Files.write(p, "tables:\n  - id: caf\u00e9\n".getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
         UserInputException e = rejected(p);
-        assertThat(e.problem()).isEqualTo("the file is not UTF-8 text");
-        assertThat(e.fix()).contains("UTF-8");
+        // "tables:\n" is 8 bytes and "  - id: caf" 11 more: the Latin-1 é is byte 19, on line 2
+        assertNames(e, "latin1.yaml", "line 2 (byte offset 19)", "the file is not UTF-8 text (byte 0xE9 here)", "UTF-8");
     }
 
     @Test
@@ -576,5 +577,131 @@ class ClaimsValidationTest {
                 + "T1,\"two\nlines\",Acc,accuracy,,50.0,percent,100,1,,\n"
                 + "T1,B,Acc,accuracy,,5 0,percent,100,1,,\n"));
         assertNames(e, "claims.csv", "line 4", "contains a space", "50");
+    }
+
+    @Test
+    void validUtf8WithFourByteCharactersStillReads() {
+        ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
+                - row: "A \uD83D\uDE00 \u00E9"
+                  metric: accuracy
+                  value: "50.0"
+                  scale: percent
+                """)));
+        assertThat(f.allClaims().get(0).row()).isEqualTo("A \uD83D\uDE00 \u00E9");
+    }
+
+    @Test
+    void duplicateClaimNamesBothLines() {
+        UserInputException e = yamlRejected("""
+                - row: A
+                  column: [Acc]
+                  metric: accuracy
+                  value: "50.0"
+                  scale: percent
+                - row: B
+                  column: [Acc]
+                  metric: accuracy
+                  value: "51.0"
+                  scale: percent
+                - row: A
+                  column: [Acc]
+                  metric: accuracy
+                  value: "52.0"
+                  scale: percent
+                """);
+        assertNames(e, "claims.yaml", "line 15", "repeats the row, column and metric of the claim at line 5", "keep one");
+        assertThat(e.problem()).contains("\"50.0\"").contains("\"52.0\"");
+    }
+
+    @Test
+    void sameCellWithAnotherMetricOrParamsIsNotADuplicate() {
+        ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
+                - {row: A, column: [R], metric: recall_at_k, params: {k: 1}, value: "50.0", scale: percent}
+                - {row: A, column: [R], metric: recall_at_k, params: {k: 5}, value: "60.0", scale: percent}
+                - {row: A, column: [R], metric: accuracy, value: "70.0", scale: percent}
+                """)));
+        assertThat(f.allClaims()).hasSize(3);
+    }
+
+    @Test
+    void csvWithAnotherSeparatorSaysWhichOne() {
+        for (String[] c : new String[][] {{";", "';'"}, {"\t", "tabs"}, {"|", "'|'"}}) {
+            String text = (HEADER + "T1,A,Acc,accuracy,,50.0,percent,100,1,,\n").replace(",", c[0]);
+            UserInputException e = rejected(write(dir, "claims.csv", text));
+            assertNames(e, "claims.csv", "line 1", "separated by " + c[1] + ", not commas", "commas between cells");
+        }
+    }
+
+    @Test
+    void aHugeExponentIsRefusedWithoutSpellingItOut() {
+        // spelling "1e999999999" out would take a billion digits (it once ran the JVM out of memory)
+        for (String huge : new String[] {"1e999999999", "1e99999999999", "-2.5E-999999999"}) {
+            UserInputException e = yamlRejected("""
+                    - row: A
+                      metric: accuracy
+                      value: "%s"
+                      scale: percent
+                    """.formatted(huge));
+            assertNames(e, "claims.yaml", "line 7", "is written with an exponent", "write the digits as printed");
+            assertThat(e.fix()).doesNotContain("for example");
+        }
+        // a short one still gets its plain form
+        UserInputException small = yamlRejected("""
+                - {row: A, metric: accuracy, value: "9.41e1", scale: percent}
+                """);
+        assertThat(small.fix()).endsWith("for example 94.1");
+    }
+
+    @Test
+    void moreDigitsThanAnyPrintedNumberIsRefused() {
+        // 34 digits once reached the exact granularity arithmetic and ended in an internal error
+        UserInputException e = yamlRejected("""
+                - {row: A, metric: accuracy, value: "94.10000000000000000000000000000001", scale: percent}
+                """);
+        assertNames(e, "claims.yaml", "line 5", "has 34 digits, more than the limit of 15", "exactly as the paper prints it");
+        // a pm is kept as a double, so the writer's 17 significant digits still read back
+        assertThat(ClaimsReader.read(write(dir, "pm.yaml", yamlClaim("""
+                - {row: A, metric: accuracy, value: "50.0", scale: percent, pm: 0.30000000000000004, pm_kind: sd}
+                """))).allClaims().get(0).pm()).isEqualTo(0.1 + 0.2);
+        // fifteen digits are still a number
+        ClaimsFile f = ClaimsReader.read(write(dir, "ok.yaml", yamlClaim("""
+                - {row: A, metric: accuracy, value: "0.9410000000000", scale: fraction}
+                """)));
+        assertThat(f.allClaims().get(0).value().decimals()).isEqualTo(13);
+    }
+
+    @Test
+    void compareMustNameTwoRowsOfTheTable() {
+        String claims = """
+                tables:
+                  - id: T1
+                    test_size: 100
+                    compare: [[Ours, %s]]
+                    claims:
+                      - {row: Ours, column: [Acc], metric: accuracy, value: "50.0", scale: percent}
+                      - {row: Base, column: [Acc], metric: accuracy, value: "40.0", scale: percent}
+                """;
+        // a misspelt row once made the comparison vanish without a word
+        UserInputException e = rejected(write(dir, "claims.yaml", claims.formatted("Bsae")));
+        assertNames(e, "claims.yaml", "line 4", "compare names the row \"Bsae\", which has no claims in table T1",
+                "exactly as the claims");
+        e = rejected(write(dir, "claims.yaml", claims.formatted("Ours")));
+        assertNames(e, "claims.yaml", "line 4", "pairs the row \"Ours\" with itself", "two different rows");
+        e = rejected(write(dir, "claims.yaml", claims.formatted("~")));
+        assertNames(e, "claims.yaml", "line 4", "compare names the row \"null\"", "exactly as the claims");
+        assertThat(ClaimsReader.read(write(dir, "ok.yaml", claims.formatted("Base"))).tables().get(0).compare())
+                .containsExactly(java.util.List.of("Ours", "Base"));
+    }
+
+    @Test
+    void aClassCountTooLargeForANumberIsRefused() {
+        UserInputException e = rejected(write(dir, "claims.yaml", """
+                tables:
+                  - id: T1
+                    class_counts: {a: 99999999999999999999, b: 1}
+                    claims:
+                      - {row: Ours, column: [Acc], metric: accuracy, value: "50.0", scale: percent}
+                """));
+        assertNames(e, "claims.yaml", "line 3", "\"99999999999999999999\", too large", "number of test items");
     }
 }

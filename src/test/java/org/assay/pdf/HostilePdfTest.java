@@ -88,4 +88,18 @@ class HostilePdfTest {
                 .isInstanceOf(UserInputException.class)
                 .hasMessageContaining("bloat.pdf, page 1").hasMessageContaining("more than 100000 drawing operators");
     }
+
+    @Test
+    void aPageTreeThatLoopsBackToItsRootNamesThePageItCannotReach() {
+        // made by org.assay.cli.BadPdfs: the root's second kid is a node whose only kid is the root
+        Path pdf = Path.of("src/test/resources/bad/pdf/page-tree-cycle.pdf");
+        assertThatThrownBy(() -> new TableExtractor().extract(pdf, null, null, null))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.position()).isEqualTo("page 2");
+                    assertThat(e.problem()).startsWith("the page cannot be read").contains("recursion");
+                    assertThat(e.fix()).contains("--pages");
+                });
+        // the page before the loop still reads
+        assertThat(new TableExtractor().extract(pdf, null, PageSelection.parse("1"), null).pagesRead()).isEqualTo(1);
+    }
 }

@@ -93,6 +93,56 @@ class TemplateRendererTest {
     }
 
     @Test
+    void aBadPartialIsReportedWhereItIsIncluded() throws Exception {
+        Files.writeString(dir.resolve("part.mustache"), "line 1\n{{> ../../etc/passwd}}\n");
+        Files.writeString(dir.resolve("t.mustache"), "a\n{{> part.mustache}}\n");
+        TemplateRenderer r = new TemplateRenderer(TemplateSource.folder(dir));
+        assertThatThrownBy(() -> r.render("t.mustache", Map.of(), Escaping.NONE))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.where()).isEqualTo(dir.resolve("part.mustache"));
+                    assertThat(e.position()).isEqualTo("line 2");
+                    assertThat(e.problem()).contains("'../../etc/passwd' is not a plain file name");
+                });
+        Files.writeString(dir.resolve("t.mustache"), "a\n\n{{> missing.mustache}}\n");
+        assertThatThrownBy(() -> r.render("t.mustache", Map.of(), Escaping.NONE))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.where()).isEqualTo(dir.resolve("t.mustache"));
+                    assertThat(e.position()).isEqualTo("line 3");
+                    assertThat(e.problem()).contains("'missing.mustache' is neither");
+                });
+    }
+
+    @Test
+    void dynamicPartialsAreRefusedSoTheModelCannotNameAFile() throws Exception {
+        // {{>*key}} would take the file name from the model, that is, from the claims file's text
+        assertThatThrownBy(() -> render("x\n{{>*label}}", Map.of("label", "cautions.md.mustache"), Escaping.NONE))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.position()).isEqualTo("line 2");
+                    assertThat(e.problem()).contains("dynamic partials");
+                });
+    }
+
+    @Test
+    void compileErrorsNameTheTemplateAndLine() throws Exception {
+        assertThatThrownBy(() -> render("{{#a}}\n{{#b}}\n{{/a}}\n", Map.of(), Escaping.NONE))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.where()).isEqualTo(dir.resolve("t.mustache"));
+                    assertThat(e.position()).isEqualTo("line 3");
+                    assertThat(e.problem()).contains("Mismatched").doesNotContain("@[");
+                });
+    }
+
+    @Test
+    void aTemplateThatIsNotUtf8NamesTheByte() throws Exception {
+        Files.write(dir.resolve("t.mustache"), new byte[] {'#', ' ', 'R', (byte) 0xE9, 's', '\n'});
+        assertThatThrownBy(() -> TemplateSource.folder(dir).load("t.mustache"))
+                .isInstanceOfSatisfying(UserInputException.class, e -> {
+                    assertThat(e.position()).isEqualTo("line 1 (byte offset 3)");
+                    assertThat(e.problem()).contains("not UTF-8").contains("0xE9");
+                });
+    }
+
+    @Test
     void eachFormatEscapesItsSpecialCharacters() throws Exception {
         Map<String, Object> m = Map.of("v", "<img src=x onerror=alert(1)> & \"q\" | 50% $x_1 \\cmd{y}");
         assertThat(render("{{v}}", m, Escaping.HTML))

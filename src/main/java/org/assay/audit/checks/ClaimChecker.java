@@ -21,7 +21,8 @@ public final class ClaimChecker {
             new PrecisionRules.PlusMinus(),
             new PrecisionRules.Digits(),
             new GapRule(),
-            new ConfigurationRule());
+            new ConfigurationRule(),
+            new KnownMetricRule());
 
     public CheckResult check(ClaimsFile claims) {
         Tally tally = new Tally();

@@ -35,6 +35,8 @@ final class GapRule implements CheckRule {
             for (List<Claim> pair : pairs(table, col, facts)) {
                 Claim a = pair.get(0), b = pair.get(1);
                 if (facts == null || !facts.count()) continue;
+                // a value outside the metric's range is the range rule's finding; no gap test can use it
+                if (outsideRange(a, facts) || outsideRange(b, facts)) continue;
                 Integer n = a.testSizeIn(table);
                 if (n == null || !Objects.equals(n, b.testSizeIn(table))) {
                     if (n == null) out.add(NotChecked.missingTestSize(NAME, table, a));
@@ -76,6 +78,11 @@ final class GapRule implements CheckRule {
             }
         }
         return out;
+    }
+
+    private static boolean outsideRange(Claim c, MetricFacts facts) {
+        double p = c.value().fraction(c.scale());
+        return p < facts.lowest() || p > facts.highest();
     }
 
     /** The pairs to compare in one column: the bold (or best) against the runner-up, and named pairs. */

@@ -202,4 +202,34 @@ class ClaimCheckerTest {
         assertThat(of(stated, "configuration", CheckKind.QUESTIONABLE)).isEmpty();
         assertThat(stated.checksRun()).containsEntry("configuration", 2);
     }
+
+    @Test
+    void unknownMetric() throws Exception {
+        // a typo one edit from a registered id: named, with the nearest id, and listed as not checked
+        CheckResult typo = check("test_size: 1000", "{row: A, column: [Acc], metric: acuracy, value: \"94.13\", scale: percent}");
+        assertThat(of(typo, "metric", CheckKind.NOT_CHECKED)).singleElement().satisfies(f -> {
+            assertThat(f.message()).contains("'acuracy'").contains("perhaps accuracy").contains("line 5");
+            assertThat(f.claims()).singleElement().satisfies(c -> assertThat(c.metric()).isEqualTo("acuracy"));
+        });
+        // extract's placeholder says the metric was never set; far from every id, so no guess
+        CheckResult placeholder = check("", "{row: A, column: [Params], metric: unknown, value: \"12\", scale: fraction}");
+        assertThat(of(placeholder, "metric", CheckKind.NOT_CHECKED)).singleElement()
+                .satisfies(f -> assertThat(f.message()).contains("no metric is set").doesNotContain("perhaps"));
+        // a known metric: quiet, but counted as checked
+        CheckResult known = check("test_size: 1000", acc("A", "94.1"));
+        assertThat(known.findings()).noneMatch(f -> f.rule().equals("metric"));
+        assertThat(known.checksRun()).containsEntry("metric", 1);
+    }
+
+    @Test
+    void aValueAboveTheRangeIsReportedOnceAndBreaksNoOtherRule() throws Exception {
+        // accuracy lies in [0, 100] percent (its definition); 104.2 beside a valid row once stopped the
+        // gap rule's two-proportion test with an error that named no file
+        CheckResult r = check("test_size: 2000", acc("A", "104.2"), acc("B", "91.3"));
+        assertThat(of(r, "range", CheckKind.INFEASIBLE)).singleElement()
+                .satisfies(f -> assertThat(f.claims().get(0).value().text()).isEqualTo("104.2"));
+        assertThat(r.findings()).noneMatch(f -> f.rule().equals("gap"));
+        // the same pair inside the range is still compared
+        assertThat(check("test_size: 2000", acc("A", "94.2"), acc("B", "91.3")).checksRun()).containsEntry("gap", 1);
+    }
 }
