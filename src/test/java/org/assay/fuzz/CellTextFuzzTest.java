@@ -14,7 +14,7 @@ import org.assay.pdf.ParsedCell;
  */
 class CellTextFuzzTest {
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void cell(byte[] input) {
         String text = new String(input, java.nio.charset.StandardCharsets.UTF_8);
         ParsedCell cell = CellText.parse(text);

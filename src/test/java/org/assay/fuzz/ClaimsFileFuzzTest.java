@@ -12,7 +12,7 @@ import org.assay.claims.ClaimsReader;
 class ClaimsFileFuzzTest {
     private static final String[] NAMES = {"claims.yaml", "claims.json", "claims.csv"};
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void claimsFile(byte[] input) {
         if (input.length == 0) return;
         Path file = FuzzFiles.write(NAMES[(input[0] & 0xff) % NAMES.length], ReaderContract.afterFirst(input));

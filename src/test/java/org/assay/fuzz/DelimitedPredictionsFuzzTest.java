@@ -12,7 +12,7 @@ import org.assay.data.ReadOptions;
  */
 class DelimitedPredictionsFuzzTest {
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void predictions(byte[] input) {
         if (input.length == 0) return;
         String name = (input[0] & 1) == 0 ? "predictions.csv" : "predictions.tsv";

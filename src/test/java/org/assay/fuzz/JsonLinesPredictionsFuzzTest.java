@@ -11,7 +11,7 @@ import org.assay.data.ReadOptions;
  */
 class JsonLinesPredictionsFuzzTest {
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void predictions(byte[] input) {
         Path file = FuzzFiles.write("predictions.jsonl", input);
         ReaderContract.returnsOrRejects(file, () -> ClassificationReader.read(file, ReadOptions.defaults()));

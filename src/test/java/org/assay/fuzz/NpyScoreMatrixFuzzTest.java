@@ -10,7 +10,7 @@ import org.assay.data.retrieval.NpyScoreMatrix;
  */
 class NpyScoreMatrixFuzzTest {
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void scoreMatrix(byte[] input) {
         Path file = FuzzFiles.write("scores.npy", input);
         ReaderContract.returnsOrRejects(file, () -> {

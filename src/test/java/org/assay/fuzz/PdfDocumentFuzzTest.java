@@ -13,7 +13,7 @@ import org.assay.pdf.PdfLimits;
 class PdfDocumentFuzzTest {
     private static final PdfLimits SMALL = new PdfLimits(1 << 20, 1 << 20, 20, 200_000, 1_000);
 
-    @FuzzTest(maxDuration = "30s")
+    @FuzzTest(maxDuration = "20s")
     void document(byte[] input) {
         Path file = FuzzFiles.write("paper.pdf", input);
         ReaderContract.returnsOrRejects(file, () -> new PdfDocumentReader(SMALL).read(file, null, null));

@@ -105,8 +105,9 @@ class NpyScoreMatrixTest {
     @Test
     void aShapeWhoseByteCountWrapsAroundIsRejectedWhenOpened(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
             throws Exception {
-        // Found reading the header code for NpyScoreMatrixFuzzTest (its input is committed there): 1073807362 x 2147352580 = 2^61 + 8 values, times 8 bytes
-        // is 64 modulo 2^64, so a header with 64 bytes of data after it looked complete and scan ran out of memory.
+        // Found reading the header code for NpyScoreMatrixFuzzTest (its input is committed there):
+        // 1073807362 x 2147352580 = 2^61 + 8 values, times 8 bytes is 64 modulo 2^64, so a header with
+        // 64 bytes of data after it looked complete and scan ran out of memory.
         String dict = "{'descr': '<f8', 'fortran_order': False, 'shape': (1073807362, 2147352580), }";
         String header = dict + " ".repeat((64 - (10 + dict.length() + 1) % 64) % 64) + "\n";
         java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
