@@ -68,8 +68,7 @@ final class PrintedNumbers {
                     "write the number as printed; a claim cannot be NaN or infinite");
         }
         if (EXPONENT.matcher(t).matches()) {
-            throw new NumberProblem(what + " " + quoted + " is written with an exponent",
-                    "write the digits as printed, for example " + new BigDecimal(t).toPlainString());
+            throw new NumberProblem(what + " " + quoted + " is written with an exponent", exponentFix(t));
         }
         if (LEADING_DOT.matcher(t).matches()) {
             throw new NumberProblem(what + " " + quoted + " has no digit before the decimal point",
@@ -85,5 +84,19 @@ final class PrintedNumbers {
             throw new NumberProblem(what + " " + quoted + " is not a number",
                     "write a plain decimal number as printed, for example 87.4");
         }
+    }
+
+    /**
+     * The fix for a number with an exponent: its plain digits when they are few. The exponent of an untrusted
+     * file can exceed BigDecimal's range (1e2147483648) or ask for a billion zeros (1e999999999).
+     */
+    private static String exponentFix(String t) {
+        try {
+            BigDecimal n = new BigDecimal(t);
+            if (Math.abs((long) n.scale()) <= 40) return "write the digits as printed, for example " + n.toPlainString();
+        } catch (NumberFormatException e) {
+            // beyond BigDecimal's exponent range: no example to give
+        }
+        return "write the digits as printed, without an exponent";
     }
 }
