@@ -71,16 +71,7 @@ final class PrintedNumbers {
                     "write the number as printed; a claim cannot be NaN or infinite");
         }
         if (EXPONENT.matcher(t).matches()) {
-            // Spell the number out only when it is short: "1e999999999" would be a billion digits.
-            String plain = null;
-            try {
-                BigDecimal n = new BigDecimal(t);
-                if (n.precision() - n.scale() <= MAX_DIGITS && n.scale() <= MAX_DIGITS) plain = n.toPlainString();
-            } catch (NumberFormatException e) {
-                // an exponent beyond BigDecimal's range: no plain form to suggest
-            }
-            throw new NumberProblem(what + " " + quoted + " is written with an exponent",
-                    "write the digits as printed" + (plain == null ? "" : ", for example " + plain));
+            throw new NumberProblem(what + " " + quoted + " is written with an exponent", exponentFix(t));
         }
         if (LEADING_DOT.matcher(t).matches()) {
             throw new NumberProblem(what + " " + quoted + " has no digit before the decimal point",
@@ -104,5 +95,19 @@ final class PrintedNumbers {
             throw new NumberProblem(what + " " + quoted + " is not a number",
                     "write a plain decimal number as printed, for example 87.4");
         }
+    }
+
+    /**
+     * The fix for a number with an exponent: its plain digits when they are few. The exponent of an untrusted
+     * file can exceed BigDecimal's range (1e2147483648) or ask for a billion zeros (1e999999999).
+     */
+    private static String exponentFix(String t) {
+        try {
+            BigDecimal n = new BigDecimal(t);
+            if (Math.abs((long) n.scale()) <= 40) return "write the digits as printed, for example " + n.toPlainString();
+        } catch (NumberFormatException e) {
+            // beyond BigDecimal's exponent range: no example to give
+        }
+        return "write the digits as printed, without an exponent";
     }
 }

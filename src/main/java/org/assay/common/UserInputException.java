@@ -51,8 +51,24 @@ public class UserInputException extends RuntimeException {
         } else if (position != null) {
             sb.append(position).append(": ");
         }
-        sb.append(problem.replace('\n', ' '));
-        if (fix != null && !fix.isBlank()) sb.append(" (").append(fix.replace('\n', ' ')).append(')');
+        sb.append(oneLineOf(problem));
+        if (fix != null && !fix.isBlank()) sb.append(" (").append(oneLineOf(fix)).append(')');
         return sb.toString();
+    }
+
+    /**
+     * Text quoted from a file (a header, a field name) can hold any character. Line breaks of every kind
+     * (\n, \r, NEL, U+2028, U+2029) become spaces so the message stays one line, and other control
+     * characters (escape sequences a terminal would act on) become '?'; tabs stay.
+     */
+    private static String oneLineOf(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n' || c == '\r' || c == '\u0085' || c == '\u2028' || c == '\u2029') out.append(' ');
+            else if (c != '\t' && Character.isISOControl(c)) out.append('?');
+            else out.append(c);
+        }
+        return out.toString();
     }
 }

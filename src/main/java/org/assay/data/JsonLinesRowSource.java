@@ -131,6 +131,11 @@ final class JsonLinesRowSource implements RowSource {
             throw new UserInputException(file, RowErrors.line(lineNumber),
                     "not valid JSON: " + e.getOriginalMessage(),
                     "write one complete JSON object per line", e);
+        } catch (NumberFormatException e) {
+            // Floats are read as BigDecimal; an exponent beyond its int range (1e2147483648) fails here, not as JSON.
+            throw new UserInputException(file, RowErrors.line(lineNumber),
+                    "a number cannot be read: " + e.getMessage(),
+                    "write numbers as plain decimals, such as 0.25", e);
         }
         if (!node.isObject()) {
             throw new UserInputException(file, RowErrors.line(lineNumber),

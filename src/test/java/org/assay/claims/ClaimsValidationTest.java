@@ -142,6 +142,22 @@ class ClaimsValidationTest {
         assertThat(e.fix()).isNotBlank();
     }
 
+    @ParameterizedTest
+    @CsvSource({
+            "1e1000000666666666668, without an exponent",  // beyond BigDecimal's exponent range (ClaimsFileFuzzTest)
+            "1e999999999, without an exponent",            // a billion zeros: no example is spelled out
+            "2.5e1, for example 25"})
+    void exponentsAreRejectedWithAShortFix(String text, String fix) {
+        UserInputException e = yamlRejected("""
+                - row: A
+                  metric: accuracy
+                  value: %s
+                  scale: percent
+                """.formatted(text));
+        assertNames(e, "claims.yaml", "line 7", "is written with an exponent", fix);
+        assertThat(e.oneLine()).hasSizeLessThan(300);
+    }
+
     @Test
     void badScale() {
         UserInputException e = yamlRejected("""

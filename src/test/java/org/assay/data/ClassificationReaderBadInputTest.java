@@ -308,6 +308,14 @@ class ClassificationReaderBadInputTest {
     }
 
     @Test
+    void jsonNumberWhoseExponentIsBeyondBigDecimal() throws Exception {
+        // Found by JsonLinesPredictionsFuzzTest: Jackson's BigDecimal parsing threw NumberFormatException.
+        assertFails(write(dir, "exponent.jsonl", "{\"id\": \"x\", \"label\": 1, \"score\": 0.5}\n"
+                        + "{\"id\": \"y\", \"label\": 0, \"score\": 1e1000000666666666668}\n"),
+                "line 2", "a number cannot be read", "plain decimals");
+    }
+
+    @Test
     void jsonDuplicateKey() throws Exception {
         assertFails(write(dir, "dupkey.jsonl", "{\"id\": \"x\", \"label\": 1, \"label\": 0, \"score\": 0.5}\n"),
                 "line 1", "not valid JSON", "Duplicate field 'label'");

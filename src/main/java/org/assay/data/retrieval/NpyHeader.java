@@ -104,6 +104,12 @@ record NpyHeader(int itemSize, ByteOrder order, int rows, int columns, long data
             throw error(file, "header", "has shape (" + size[0] + ", " + size[1] + "): each dimension must be"
                     + " between 1 and " + (Integer.MAX_VALUE - 8), "check the array before saving");
         }
+        // Both dimensions fit an int, so their product fits a long, but times 8 bytes it can wrap around:
+        // (1073807362 x 2147352580) float64 would declare 64 bytes of data and pass the file-size check.
+        if (size[0] * size[1] > Long.MAX_VALUE / itemSize) {
+            throw error(file, "header", "has shape (" + size[0] + ", " + size[1] + "), more values than a file can hold",
+                    "check the array before saving");
+        }
         return new NpyHeader(itemSize, order, (int) size[0], (int) size[1], dataOffset);
     }
 

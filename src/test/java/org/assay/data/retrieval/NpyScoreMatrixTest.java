@@ -103,6 +103,25 @@ class NpyScoreMatrixTest {
     }
 
     @Test
+    void aShapeWhoseByteCountWrapsAroundIsRejectedWhenOpened(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        // Found reading the header code for NpyScoreMatrixFuzzTest (its input is committed there):
+        // 1073807362 x 2147352580 = 2^61 + 8 values, times 8 bytes is 64 modulo 2^64, so a header with
+        // 64 bytes of data after it looked complete and scan ran out of memory.
+        String dict = "{'descr': '<f8', 'fortran_order': False, 'shape': (1073807362, 2147352580), }";
+        String header = dict + " ".repeat((64 - (10 + dict.length() + 1) % 64) % 64) + "\n";
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        bytes.write(new byte[] {(byte) 0x93, 'N', 'U', 'M', 'P', 'Y', 1, 0, (byte) header.length(), 0});
+        bytes.write(header.getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+        bytes.write(new byte[64]);
+        java.nio.file.Path f = dir.resolve("wraps.npy");
+        java.nio.file.Files.write(f, bytes.toByteArray());
+
+        assertThatThrownBy(() -> NpyScoreMatrix.open(f)).isInstanceOf(UserInputException.class)
+                .hasMessageContaining("wraps.npy, header").hasMessageContaining("more values than a file can hold");
+    }
+
+    @Test
     void largerMatricesAreReadRowByRowAcrossBufferBoundaries() {
         // groups_sentinel.npy: 14 x 70 float32; the reference ranks depend on every value
         NpyScoreMatrix m = NpyScoreMatrix.open(RetrievalFixtures.fixture("groups_sentinel.npy"));
