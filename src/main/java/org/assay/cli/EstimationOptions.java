@@ -2,10 +2,14 @@ package org.assay.cli;
 
 import org.assay.audit.EstimationSettings;
 import org.assay.audit.IntervalChoice;
+import org.assay.common.UserInputException;
 import picocli.CommandLine.Option;
 
 /** Options shared by the commands that compute intervals. */
 final class EstimationOptions {
+    /** System property read when {@code --threads} is not given. */
+    static final String THREADS_PROPERTY = "assay.threads";
+
     @Option(names = "--confidence", paramLabel = "C", defaultValue = "0.95",
             description = "Confidence level of every interval (default ${DEFAULT-VALUE}).")
     double confidence;
@@ -19,7 +23,8 @@ final class EstimationOptions {
     long seed;
 
     @Option(names = "--threads", paramLabel = "T",
-            description = "Worker threads (default: all cores). Results do not depend on it.")
+            description = "Worker threads (default: the system property assay.threads if set, else all cores). "
+                    + "Results do not depend on it.")
     Integer threads;
 
     @Option(names = "--interval", paramLabel = "METHOD", defaultValue = "auto",
@@ -28,7 +33,25 @@ final class EstimationOptions {
     String interval;
 
     EstimationSettings settings() {
-        int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        int t = threads == null ? defaultThreads() : threads;
         return new EstimationSettings(confidence, resamples, seed, t, IntervalChoice.fromId(interval));
+    }
+
+    /**
+     * The JVM-wide default, so a machine or a test can pin the thread count without changing the command line
+     * ({@code ASSAY_JAVA_OPTS=-Dassay.threads=1}); an unreadable value stops the run rather than being ignored.
+     */
+    private static int defaultThreads() {
+        String set = System.getProperty(THREADS_PROPERTY);
+        if (set == null) return Runtime.getRuntime().availableProcessors();
+        try {
+            int t = Integer.parseInt(set.strip());
+            if (t >= 1) return t;
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw UserInputException.usage("the system property " + THREADS_PROPERTY + " is \"" + set
+                        + "\", not a number of threads",
+                "set -D" + THREADS_PROPERTY + " to a whole number of 1 or more, such as 4, or pass --threads");
     }
 }

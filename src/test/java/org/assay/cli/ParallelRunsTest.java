@@ -18,12 +18,13 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * The same audit run in 8 assay processes at once, on the same demo inputs, into 8 report folders:
  * every report file (md, html, json, tex) is the same bytes in all 8 (DESIGN.md principle 5). Half of the
- * runs use one worker thread ({@code --threads 1}), half the default (all cores), so the same comparison
- * shows that results do not depend on the thread count, for the whole report set.
+ * runs use one worker thread (two with {@code --threads 1}, two with the JVM property {@code -Dassay.threads=1}),
+ * half the default (all cores), so the same comparison shows that results do not depend on the thread count,
+ * for the whole report set.
  *
  * <p>All runs start in the same working directory and name the inputs by the same relative path, so the
  * provenance blocks agree except for the command line, which names each run's own folder
- * ({@code --out run-N}) and, for half of them, {@code --threads 1}. That one piece is replaced by a
+ * ({@code --out run-N}) and, for two of them, {@code --threads 1}. That one piece is replaced by a
  * placeholder before comparing; the test checks that it was found in every file that records the command,
  * and that nothing else differs.
  *
@@ -46,10 +47,12 @@ class ParallelRunsTest {
 
         List<Process> running = new ArrayList<>();
         for (int i = 0; i < RUNS; i++) {
-            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                    "-cp", System.getProperty("java.class.path"), Main.class.getName(),
+            List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString()));
+            // runs 3 and 7 pin one thread through the JVM property, runs 1 and 5 through the option
+            if (i % 4 == 3) cmd.add("-Dassay.threads=1");
+            cmd.addAll(List.of("-cp", System.getProperty("java.class.path"), Main.class.getName(),
                     "audit", "inputs/audit.yaml", "--out", "run-" + i));
-            if (i % 2 == 1) cmd.addAll(List.of("--threads", "1"));
+            if (i % 4 == 1) cmd.addAll(List.of("--threads", "1"));
             cmd.addAll(List.of("--format", "md,html,json,tex", "--resamples", "2000"));
             running.add(new ProcessBuilder(cmd).directory(work.toFile()).redirectErrorStream(true)
                     .redirectOutput(tmp.resolve("run-" + i + ".log").toFile()).start());
