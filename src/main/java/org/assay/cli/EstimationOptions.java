@@ -33,6 +33,10 @@ final class EstimationOptions {
     String interval;
 
     EstimationSettings settings() {
+        if (threads != null && threads < 1) {
+            throw UserInputException.usage("--threads " + threads + " is not a number of threads",
+                    "give --threads a whole number of 1 or more, or leave it out to use all cores");
+        }
         int t = threads == null ? defaultThreads() : threads;
         return new EstimationSettings(confidence, resamples, seed, t, IntervalChoice.fromId(interval));
     }

@@ -64,4 +64,14 @@ class ThreadsPropertyTest {
                     .doesNotContain("Exception");
         }
     }
+
+    @Test
+    void threadsBelowOneIsAUsageError() throws Exception {
+        Path file = regressionFile();
+        CliRun run = CliRun.of("measure", file.toString(), "--task", "regression", "--metric", "mae",
+                "--resamples", "100", "--threads", "0");
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.errLines()).hasSize(1);
+        assertThat(run.err()).contains("--threads 0 is not a number of threads");
+    }
 }
