@@ -1,5 +1,6 @@
 package org.assay.cli;
 
+import static org.assay.cli.SmallAudit.CLAIMS;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -37,19 +38,6 @@ class BadDataFilesTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    /** One accuracy claim (line 8 holds the value). */
-    private static final String CLAIMS = String.join("\n",
-            "tables:",
-            "  - id: T1",
-            "    test_size: 1000",
-            "    claims:",
-            "      - row: Ours",
-            "        column: [Accuracy]",
-            "        metric: accuracy",
-            "        value: \"75.0\"",
-            "        scale: percent",
-            "");
-
     /** The accuracy claim and a ROC AUC claim, so that the scores matter to the result. */
     private static final String CLAIMS_WITH_AUC = CLAIMS + String.join("\n",
             "      - row: Ours",
@@ -60,8 +48,7 @@ class BadDataFilesTest {
             "");
 
     /** The clean predictions most fixtures are a damaged copy of (binary, positive class 1). */
-    private static final String CLEAN = "id,label,prediction,score\n"
-            + "a,1,1,0.9\nb,0,0,0.2\nc,1,0,0.4\nd,0,0,0.1\ne,1,1,0.8\nf,0,1,0.6\n";
+    private static final String CLEAN = SmallAudit.PREDICTIONS;
 
     /** Predictions without a label column, for runs with a truth file. */
     private static final String PREDICTIONS_FOR_TRUTH = "id,prediction\na,1\nb,0\nc,0\nd,0\ne,1\nf,1\n";

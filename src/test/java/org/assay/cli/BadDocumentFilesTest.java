@@ -1,5 +1,7 @@
 package org.assay.cli;
 
+import static org.assay.cli.SmallAudit.CLAIMS;
+import static org.assay.cli.SmallAudit.PREDICTIONS;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -39,21 +41,6 @@ class BadDocumentFilesTest {
 
     @TempDir Path tmp;
 
-    /** A valid claims file for the audits of audit files and templates (first claim on line 5). */
-    private static final String CLAIMS = String.join("\n",
-            "tables:",
-            "  - id: T1",
-            "    test_size: 1000",
-            "    claims:",
-            "      - row: Ours",
-            "        column: [Accuracy]",
-            "        metric: accuracy",
-            "        value: \"75.0\"",
-            "        scale: percent",
-            "");
-    private static final String PREDICTIONS = "id,label,prediction,score\n"
-            + "a,1,1,0.9\nb,0,0,0.2\nc,1,0,0.4\nd,0,0,0.1\ne,1,1,0.8\nf,0,1,0.6\n";
-
     private static Path bad(String relative) { return BAD.resolve(relative); }
 
     /** Exit 2, one or two lines, the first naming the file and then the position, no trace, no output folder. */
@@ -67,8 +54,7 @@ class BadDocumentFilesTest {
         if (out != null) assertThat(out).doesNotExist();
     }
 
-    /** As {@link #assertRejected}, for a limit: the message says which limit instead of a position. */
-    /** Rejected, and the message names the limit and the option that raises it. */
+    /** As {@link #assertRejected}, for a limit: the message names the limit and the option that raises it. */
     private static void assertOverLimit(CliRun run, String named, Path out) {
         assertRejected(run, named, "", out);
         assertThat(run.errLines().get(0)).containsPattern("limit [a-z-]+ is \\d+").containsPattern("--limit [a-z-]+=N");

@@ -1,5 +1,7 @@
 package org.assay.cli;
 
+import static org.assay.cli.SmallAudit.CLAIMS;
+import static org.assay.cli.SmallAudit.PREDICTIONS;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Files;
@@ -21,20 +23,6 @@ import org.junit.jupiter.params.provider.MethodSource;
 class BadInputCommandTest {
     @TempDir Path tmp;
 
-    private static final String CLAIMS = String.join("\n",
-            "tables:",                                   // line 1
-            "  - id: T1",                                // 2
-            "    test_size: 1000",                       // 3
-            "    claims:",                               // 4
-            "      - row: Ours",                         // 5
-            "        column: [Accuracy]",                // 6
-            "        metric: accuracy",                  // 7
-            "        value: \"75.0\"",                   // 8
-            "        scale: percent",                    // 9
-            "");
-
-    private static final String PREDICTIONS = "id,label,prediction,score\n"
-            + "a,1,1,0.9\nb,0,0,0.2\nc,1,0,0.4\nd,0,0,0.1\ne,1,1,0.8\nf,0,1,0.6\n";
 
     /** name, claims file name, claims text, predictions text, text the message must contain. */
     static Stream<Arguments> cases() {

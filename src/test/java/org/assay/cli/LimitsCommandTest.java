@@ -1,5 +1,7 @@
 package org.assay.cli;
 
+import static org.assay.cli.SmallAudit.CLAIMS;
+import static org.assay.cli.SmallAudit.PREDICTIONS;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
@@ -22,19 +24,6 @@ import org.junit.jupiter.api.io.TempDir;
 class LimitsCommandTest {
     @TempDir Path tmp;
 
-    private static final String CLAIMS = String.join("\n",
-            "tables:",
-            "  - id: T1",
-            "    test_size: 1000",
-            "    claims:",
-            "      - row: Ours",
-            "        column: [Accuracy]",
-            "        metric: accuracy",
-            "        value: \"75.0\"",
-            "        scale: percent",
-            "");
-    private static final String PREDICTIONS = "id,label,prediction,score\n"
-            + "a,1,1,0.9\nb,0,0,0.2\nc,1,0,0.4\nd,0,0,0.1\ne,1,1,0.8\nf,0,1,0.6\n";
     private static final Path CORPUS = Path.of("src/test/resources/pdf");
 
     private CliRun audit(Path claims, Path predictions, String... more) {
